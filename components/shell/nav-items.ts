@@ -1,0 +1,14 @@
+import type { Role } from "@/lib/auth/roles";
+
+export type NavItem = { href: string; label: string };
+
+/** The navigation each role sees. The server checks every page again; this only hides links. */
+export function navItemsFor(role: Role, devTools: boolean): NavItem[] {
+  if (role === "client") return [{ href: "/portal", label: "My projects" }];
+  const items: NavItem[] = [{ href: "/board", label: "Board" }];
+  if (role === "lead") {
+    items.push({ href: "/people", label: "People" }, { href: "/settings", label: "Settings" }, { href: "/outbox", label: "Outbox" });
+    if (devTools) items.push({ href: "/dev/mail", label: "Caught mail" });
+  }
+  return items;
+}

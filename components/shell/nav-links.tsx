@@ -1,0 +1,25 @@
+"use client";
+import Link from "next/link";
+import { usePathname } from "next/navigation";
+import type { NavItem } from "./nav-items";
+
+export function NavLinks({ items }: { items: NavItem[] }) {
+  const pathname = usePathname();
+  return (
+    <nav aria-label="Main" className="flex items-center gap-1 overflow-x-auto">
+      {items.map((item) => {
+        const active = pathname === item.href || pathname.startsWith(item.href + "/");
+        return (
+          <Link
+            key={item.href}
+            href={item.href}
+            aria-current={active ? "page" : undefined}
+            className={`whitespace-nowrap rounded-lg px-3 py-1.5 text-sm font-medium ${active ? "bg-accent-soft text-accent-strong" : "text-muted hover:bg-paper hover:text-ink"}`}
+          >
+            {item.label}
+          </Link>
+        );
+      })}
+    </nav>
+  );
+}

@@ -1,0 +1,12 @@
+import { integer, jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+
+/** One row: the installation company this deployment serves, and its company-wide rules. */
+export const company = pgTable("company", {
+  id: integer("id").primaryKey().default(1),
+  name: text("name").notNull(),
+  email: text("email").notNull(),
+  phone: text("phone"),
+  /** Partial cycle rules that override the defaults in lib/cycling. */
+  cycleRules: jsonb("cycle_rules").$type<Record<string, unknown>>().notNull().default({}),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+});

@@ -1,0 +1,26 @@
+import { index, integer, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { projects } from "./projects";
+import { users } from "./users";
+
+export const visitKinds = ["install day", "leak check", "water test", "first stocking", "water change", "filter service", "service visit"] as const;
+
+/** Dated visits to a client's site: the install day and everything after it. */
+export const visits = pgTable(
+  "visits",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    projectId: uuid("project_id")
+      .notNull()
+      .references(() => projects.id),
+    kind: text("kind", { enum: visitKinds }).notNull(),
+    startsAt: timestamp("starts_at", { withTimezone: true }).notNull(),
+    durationMinutes: integer("duration_minutes").notNull().default(120),
+    notes: text("notes"),
+    createdBy: uuid("created_by")
+      .notNull()
+      .references(() => users.id),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    cancelledAt: timestamp("cancelled_at", { withTimezone: true }),
+  },
+  (t) => [index("visits_project_idx").on(t.projectId, t.startsAt)],
+);

@@ -1,0 +1,59 @@
+/**
+ * The app's configuration, read once from the environment and checked. Nothing else reads
+ * process.env directly. Parsed lazily so `next build` runs without a database or secrets.
+ */
+import { z } from "zod";
+
+const bool = z
+  .enum(["0", "1", "true", "false", ""])
+  .optional()
+  .transform((v) => v === "1" || v === "true");
+
+const schema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  DATABASE_URL: z.string().url().default("postgres://tankwright@127.0.0.1:54329/tankwright"),
+  DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  NEXTAUTH_SECRET: z.string().min(16).optional(),
+  APP_URL: z.string().url().default("http://localhost:3000"),
+  SMTP_HOST: z.string().default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().default(1025),
+  SMTP_SECURE: bool,
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  MAIL_FROM: z.string().default("Tankwright <no-reply@tankwright.test>"),
+  /** The local mail catcher's HTTP API; set only in development and tests. */
+  MAIL_CATCHER_URL: z.string().url().optional(),
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_REGION: z.string().default("us-east-1"),
+  S3_BUCKET: z.string().default("tankwright"),
+  S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
+  S3_FORCE_PATH_STYLE: bool,
+  /** Turns on development-only pages (the caught-mail viewer). Never set in production. */
+  TANKWRIGHT_DEV_TOOLS: bool,
+});
+
+export type Env = z.infer<typeof schema>;
+
+let cached: Env | null = null;
+
+export function env(): Env {
+  if (cached) return cached;
+  const parsed = schema.safeParse(process.env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`).join("\n");
+    throw new Error(`Tankwright's configuration is invalid:\n${lines}`);
+  }
+  cached = parsed.data;
+  return cached;
+}
+
+/** The secret that signs session tokens: required in production, a fixed dev value otherwise. */
+export function authSecret(): string {
+  const e = env();
+  if (e.NEXTAUTH_SECRET) return e.NEXTAUTH_SECRET;
+  if (e.NODE_ENV === "production") {
+    throw new Error("NEXTAUTH_SECRET must be set in production (at least 16 characters; the same on every app instance).");
+  }
+  return "tankwright-development-secret-not-for-production";
+}

@@ -1,0 +1,44 @@
+import type { Role } from "./roles";
+
+/**
+ * Who may do what on a project. The caller's relation to the project decides: a lead relates to
+ * every project, crew only to projects they are assigned to, a client only to their own.
+ */
+export type ProjectAction =
+  | "view"
+  | "move"
+  | "override_gate"
+  | "edit_survey"
+  | "approve_load"
+  | "tick_checklist"
+  | "untick_checklist"
+  | "log_water_test"
+  | "void_water_test"
+  | "log_dose"
+  | "record_stocking"
+  | "upload_photo"
+  | "write_note"
+  | "send_message"
+  | "edit_details";
+
+export type Relation = { role: Role; assigned: boolean; owner: boolean };
+
+const LEAD_ONLY: ProjectAction[] = ["override_gate", "approve_load", "untick_checklist", "void_water_test", "write_note", "edit_details"];
+const CREW: ProjectAction[] = ["view", "move", "edit_survey", "tick_checklist", "log_water_test", "log_dose", "record_stocking", "upload_photo", "send_message"];
+const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message"];
+
+/** True when the caller can see the project at all (else it answers 404, not 403). */
+export function canSeeProject(rel: Relation): boolean {
+  if (rel.role === "lead") return true;
+  if (rel.role === "crew") return rel.assigned;
+  return rel.owner;
+}
+
+export function canOnProject(rel: Relation, action: ProjectAction): boolean {
+  if (!canSeeProject(rel)) return false;
+  if (rel.role === "lead") return true;
+  if (rel.role === "crew") return CREW.includes(action);
+  return CLIENT.includes(action);
+}
+
+export { LEAD_ONLY };

@@ -1,0 +1,21 @@
+import { defineConfig, devices } from "@playwright/test";
+
+// Runs against the app that `npm test` builds and starts; Chromium comes from Debian's package.
+export default defineConfig({
+  testDir: "tests/e2e",
+  timeout: 60_000,
+  expect: { timeout: 10_000 },
+  fullyParallel: false,
+  workers: 1,
+  retries: process.env.CI ? 1 : 0,
+  reporter: [["list"]],
+  use: {
+    baseURL: process.env.TEST_APP_URL ?? "http://127.0.0.1:3100",
+    trace: "retain-on-failure",
+    launchOptions: {
+      executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
+      args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    },
+  },
+  projects: [{ name: "chromium", use: { ...devices["Desktop Chrome"], channel: undefined } }],
+});

@@ -1,0 +1,7 @@
+/** Seeds the demo scenario when the database has no accounts yet; otherwise does nothing. */
+import { closeDb, db } from "../db";
+import { seedDemo } from "../db/seed/demo";
+
+const seeded = await seedDemo(db());
+await closeDb();
+console.log(seeded ? "seed: demo scenario loaded" : "seed: accounts exist, demo not loaded");

@@ -1,0 +1,96 @@
+#!/usr/bin/env bash
+# Runs every test: types, unit, integration (real PostgreSQL) and browser (Debian's Chromium),
+# on a fresh database in a test-only cluster that never touches the demo data.
+#
+#   npm test                                  everything
+#   npm test -- --unit                        types and unit tests only (no services)
+#   npm test -- --integration [files…]        integration tests (all, or the files named)
+#   npm test -- --e2e [files…]                browser tests (all, or the files named)
+# Environment: TEST_SLOT=N runs on its own ports, cluster and build folder, so several runs can
+# share a machine; SKIP_BUILD=1 reuses the last build of that slot; SKIP_TYPES=1 skips tsc.
+set -euo pipefail
+source "$(dirname "$0")/lib/common.sh"
+
+want_unit=1 want_int=1 want_e2e=1
+int_files=() e2e_files=()
+if [ $# -gt 0 ]; then
+  want_unit=0 want_int=0 want_e2e=0
+  target=""
+  for arg in "$@"; do
+    case "$arg" in
+      --unit) want_unit=1; target="" ;;
+      --integration) want_int=1; target=int ;;
+      --e2e) want_e2e=1; target=e2e ;;
+      *) if [ "$target" = int ]; then int_files+=("$arg"); elif [ "$target" = e2e ]; then e2e_files+=("$arg"); else echo "Unknown argument: $arg" >&2; exit 2; fi ;;
+    esac
+  done
+fi
+
+slot=${TEST_SLOT:-0}
+PORT=$((3100 + slot))
+PG_PORT=$((54339 + slot))
+SMTP_P=$((2525 + slot * 10)) MAILAPI_P=$((2580 + slot * 10)) S3_P=$((4579 + slot * 10))
+DIST=.next-test$([ "$slot" = 0 ] || echo "-$slot")
+
+cleanup() {
+  stop_children
+  pg_down
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+ensure_node_modules
+
+if [ -z "${SKIP_TYPES:-}" ]; then
+  echo "== types"
+  node node_modules/typescript/bin/tsc --noEmit
+fi
+
+if [ "$want_unit" = 1 ]; then
+  echo "== unit"
+  node node_modules/vitest/vitest.mjs run --project unit
+fi
+
+[ "$want_int" = 1 ] || [ "$want_e2e" = 1 ] || { echo "All tests passed."; exit 0; }
+
+if [ "$want_e2e" = 1 ] && [ ! -x /usr/bin/chromium ]; then
+  echo "== installing Debian's Chromium for browser tests"
+  sudo=""
+  [ "$(id -u)" -eq 0 ] || sudo=sudo
+  $sudo apt-get update -qq && DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -qq chromium >/dev/null
+fi
+
+echo "== services"
+pg_up "test-$slot" "$PG_PORT" fast
+pg_createdb "$PG_PORT" tankwright_test fresh
+export DATABASE_URL=postgres://tankwright@127.0.0.1:$PG_PORT/tankwright_test
+export NEXTAUTH_SECRET=test-secret-for-the-test-run-only
+export APP_URL=http://127.0.0.1:$PORT NEXTAUTH_URL=http://127.0.0.1:$PORT TEST_APP_URL=http://127.0.0.1:$PORT
+rm -rf ".data/s3-test-$slot"
+start_fakes "$SMTP_P" "$MAILAPI_P" "$S3_P" "$PROJECT_ROOT/.data/s3-test-$slot"
+"${TSX[@]}" scripts/migrate.ts
+"${TSX[@]}" scripts/seed.ts
+
+if [ -z "${SKIP_BUILD:-}" ] || [ ! -f "$DIST/BUILD_ID" ]; then
+  echo "== build"
+  NEXT_DIST_DIR=$DIST node node_modules/next/dist/bin/next build >".data/test-build-$slot.log" 2>&1 || {
+    tail -50 ".data/test-build-$slot.log"
+    exit 1
+  }
+fi
+
+NEXT_DIST_DIR=$DIST node node_modules/next/dist/bin/next start -p "$PORT" >".data/test-server-$slot.log" 2>&1 &
+CHILD_PIDS+=($!)
+"${TSX[@]}" scripts/worker.ts >".data/test-worker-$slot.log" 2>&1 &
+CHILD_PIDS+=($!)
+wait_http "http://127.0.0.1:$PORT/api/health" 60
+
+if [ "$want_int" = 1 ]; then
+  echo "== integration"
+  node node_modules/vitest/vitest.mjs run --project integration "${int_files[@]}"
+fi
+if [ "$want_e2e" = 1 ]; then
+  echo "== browser"
+  node node_modules/@playwright/test/cli.js test "${e2e_files[@]}"
+fi
+echo "All tests passed."

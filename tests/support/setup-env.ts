@@ -1,0 +1,6 @@
+import { afterAll } from "vitest";
+import { closeDb } from "@/db";
+
+afterAll(async () => {
+  await closeDb();
+});

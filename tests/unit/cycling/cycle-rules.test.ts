@@ -1,0 +1,52 @@
+import { describe, expect, it } from "vitest";
+import { DEFAULT_CYCLE_RULES, resolveCycleRules, validateCycleRules } from "@/lib/cycling/cycle-rules";
+
+describe("validateCycleRules", () => {
+  it("accepts the defaults and an empty override", () => {
+    expect(validateCycleRules(DEFAULT_CYCLE_RULES)).toEqual([]);
+    expect(validateCycleRules({})).toEqual([]);
+  });
+
+  it("flags values that would switch a rule off or make no sense", () => {
+    const problems = validateCycleRules({
+      zeroReadingsNeeded: 0,
+      minHoursBetweenZeros: -1,
+      maxAgeHoursOfLatest: 0,
+      clearWithinHoursOfDose: 1000,
+      stallDays: 2.5,
+      stallChangeMgL: 0,
+      requireNitrate: "yes",
+    });
+    expect(problems.map((p) => p.field)).toEqual([
+      "zeroReadingsNeeded",
+      "minHoursBetweenZeros",
+      "maxAgeHoursOfLatest",
+      "clearWithinHoursOfDose",
+      "stallDays",
+      "stallChangeMgL",
+      "requireNitrate",
+    ]);
+    expect(problems[0].message).toBe("Zero readings needed must be a whole number from 1 to 7.");
+  });
+
+  it("rejects values of the wrong type from parsed JSON", () => {
+    expect(validateCycleRules({ stallDays: "10" }).map((p) => p.field)).toEqual(["stallDays"]);
+  });
+});
+
+describe("resolveCycleRules", () => {
+  it("overlays overrides on the defaults, keeping defaults for undefined", () => {
+    expect(resolveCycleRules({ stallDays: 14, requireNitrate: undefined })).toEqual({
+      ...DEFAULT_CYCLE_RULES,
+      stallDays: 14,
+    });
+  });
+
+  it("throws RangeError naming the problem", () => {
+    expect(() => resolveCycleRules({ zeroReadingsNeeded: 0 })).toThrow(/Zero readings needed/);
+  });
+
+  it("keeps the defaults frozen", () => {
+    expect(Object.isFrozen(DEFAULT_CYCLE_RULES)).toBe(true);
+  });
+});
