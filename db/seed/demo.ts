@@ -7,6 +7,7 @@ import { STAGES, type Stage } from "../../lib/stages/stages";
 import { DEMO_COMPANY, DEMO_PASSWORD, DEMO_PEOPLE } from "./demo-people";
 import { DEMO_PROJECTS } from "./demo-projects";
 import { cycleSeries } from "./demo-readings";
+import { DEMO_FEATURE_SEEDS } from "./demo-features";
 
 const DAY = 24 * 3600 * 1000;
 
@@ -36,6 +37,7 @@ export async function seedDemo(db: Db, now = new Date()): Promise<boolean> {
       positions.set(stage, generateNKeysBetween(null, null, n));
     }
 
+    const projectIds: Record<string, string> = {};
     for (const p of DEMO_PROJECTS) {
       const stageEnteredAt = new Date(now.getTime() - p.stageDaysAgo * DAY);
       const install = new Date(now.getTime() + p.installInDays * DAY);
@@ -56,6 +58,7 @@ export async function seedDemo(db: Db, now = new Date()): Promise<boolean> {
           createdAt: new Date(stageEnteredAt.getTime() - 20 * DAY),
         })
         .returning({ id: projects.id });
+      projectIds[p.key] = row.id;
       await tx.insert(projectCrew).values(p.crew.map((c) => ({ projectId: row.id, userId: idOf(c) })));
 
       // A plausible history: one event per stage passed, spaced out before the current stage.
@@ -97,6 +100,8 @@ export async function seedDemo(db: Db, now = new Date()): Promise<boolean> {
         });
       }
     }
+    const peopleIds = Object.fromEntries(DEMO_PEOPLE.map((p) => [p.key, idOf(p.key)])) as Record<string, string>;
+    for (const seedFeature of DEMO_FEATURE_SEEDS) await seedFeature(tx, { now, projectIds, peopleIds });
     return true;
   });
 }

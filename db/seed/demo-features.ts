@@ -1,0 +1,9 @@
+import type { Tx } from "../index";
+
+/** What a feature's demo seed gets: today, and the ids of the demo projects and people by key. */
+export type DemoContext = { now: Date; projectIds: Record<string, string>; peopleIds: Record<string, string> };
+
+export type FeatureSeed = (tx: Tx, ctx: DemoContext) => Promise<void>;
+
+/** Each feature adds its demo records here, in order, inside the seed's one transaction. */
+export const DEMO_FEATURE_SEEDS: FeatureSeed[] = [];
