@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
 import { requirePageProject } from "@/server/page-project";
-import { getStageTimeline } from "@/db/queries/project-page";
-import { StageTimeline } from "./_components/stage-timeline";
+import { ClientOverview } from "./_components/client-overview";
+import { StaffOverview } from "./_components/staff-overview";
 
 export const metadata: Metadata = { title: "Project" };
 
@@ -10,13 +10,5 @@ export default async function ProjectOverviewPage({ params }: { params: Promise<
   const { id } = await params;
   const user = await requirePageUser();
   const { project } = await requirePageProject(id, user);
-  const timeline = await getStageTimeline(project.id);
-  return (
-    <section aria-labelledby="timeline-heading" className="flex flex-col gap-3">
-      <h2 id="timeline-heading" className="text-lg font-semibold">
-        Timeline
-      </h2>
-      <StageTimeline events={timeline} />
-    </section>
-  );
+  return user.role === "client" ? <ClientOverview project={project} user={user} /> : <StaffOverview project={project} user={user} />;
 }
