@@ -14,21 +14,7 @@ export function action<S extends z.ZodType, T>(
   opts: { schema: S; roles: Role[] },
   run: (input: z.infer<S>, user: SessionUser) => Promise<T>,
 ) {
-  return async (raw: unknown): Promise<ActionResult<T>> => {
-    try {
-      const parsed = opts.schema.safeParse(raw);
-      if (!parsed.success) {
-        return { ok: false, status: 400, error: "Some fields need attention.", fields: fieldErrorsFromIssues(parsed.error.issues) };
-      }
-      const user = await requireUser(...opts.roles);
-      return { ok: true, data: await run(parsed.data, user) };
-    } catch (error) {
-      if (error instanceof AppError) return { ok: false, status: error.status, error: error.message, fields: error.fields };
-      const id = crypto.randomUUID().slice(0, 8);
-      console.error(`[error ${id}]`, error);
-      return { ok: false, status: 500, error: `Something went wrong on our side (reference ${id}). Try again in a moment.` };
-    }
-  };
+  return guarded(opts.schema, async (input) => run(input, await requireUser(...opts.roles)));
 }
 
 /**
@@ -36,9 +22,13 @@ export function action<S extends z.ZodType, T>(
  * token) is the credential. Same parsing and error handling as `action`.
  */
 export function publicAction<S extends z.ZodType, T>(opts: { schema: S }, run: (input: z.infer<S>) => Promise<T>) {
+  return guarded(opts.schema, run);
+}
+
+function guarded<S extends z.ZodType, T>(schema: S, run: (input: z.infer<S>) => Promise<T>) {
   return async (raw: unknown): Promise<ActionResult<T>> => {
     try {
-      const parsed = opts.schema.safeParse(raw);
+      const parsed = schema.safeParse(raw);
       if (!parsed.success) {
         return { ok: false, status: 400, error: "Some fields need attention.", fields: fieldErrorsFromIssues(parsed.error.issues) };
       }
