@@ -17,14 +17,6 @@ export function action<S extends z.ZodType, T>(
   return guarded(opts.schema, async (input) => run(input, await requireUser(...opts.roles)));
 }
 
-/**
- * An action open to people who aren't signed in, where a secret in the input (an invitation
- * token) is the credential. Same parsing and error handling as `action`.
- */
-export function publicAction<S extends z.ZodType, T>(opts: { schema: S }, run: (input: z.infer<S>) => Promise<T>) {
-  return guarded(opts.schema, run);
-}
-
 function guarded<S extends z.ZodType, T>(schema: S, run: (input: z.infer<S>) => Promise<T>) {
   return async (raw: unknown): Promise<ActionResult<T>> => {
     try {
