@@ -2,7 +2,7 @@ import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
 import { and, asc, desc, eq, gt, isNull, sql } from "drizzle-orm";
-import { db } from "../index";
+import { db, type Tx } from "../index";
 import { invitations, notices, users } from "../schema";
 import { companyName, enqueueNotice } from "./outbox";
 import { invitationEmail } from "../../lib/mail/invitation-email";
@@ -62,19 +62,22 @@ export async function listPeople() {
  * invitation and its e-mail are written in one transaction.
  */
 export async function inviteUser(input: { name: string; email: string; role: Role; phone?: string | null }, invitedBy: string) {
-  return db().transaction(async (tx) => {
-    const [existing] = await tx
-      .select({ id: users.id })
-      .from(users)
-      .where(sql`lower(${users.email}) = lower(${input.email})`);
-    if (existing) throw new AppError(409, "Someone already has an account with that e-mail.", { email: "Someone already has an account with that e-mail." });
-    const [user] = await tx
-      .insert(users)
-      .values({ name: input.name, email: input.email, role: input.role, phone: input.phone ?? null })
-      .returning();
-    await issueInvitation(tx, user, invitedBy);
-    return user;
-  });
+  return db().transaction((tx) => inviteUserInTx(tx, input, invitedBy));
+}
+
+/** inviteUser inside a caller's transaction, for writes that create an account along with other records. */
+export async function inviteUserInTx(tx: Tx, input: { name: string; email: string; role: Role; phone?: string | null }, invitedBy: string) {
+  const [existing] = await tx
+    .select({ id: users.id })
+    .from(users)
+    .where(sql`lower(${users.email}) = lower(${input.email})`);
+  if (existing) throw new AppError(409, "Someone already has an account with that e-mail.", { email: "Someone already has an account with that e-mail." });
+  const [user] = await tx
+    .insert(users)
+    .values({ name: input.name, email: input.email, role: input.role, phone: input.phone ?? null })
+    .returning();
+  await issueInvitation(tx, user, invitedBy);
+  return user;
 }
 
 /** A fresh link for someone who hasn't set a password yet; older links stop working. */

@@ -1,0 +1,102 @@
+import "server-only";
+import { and, eq, sql } from "drizzle-orm";
+import { projects } from "../schema";
+import { visibleProjectsWhere } from "./project-access";
+import { queryPrepared } from "./prepared";
+import { cycleVerdict, loadCycleInputs, loadRecordFacts, toGateFacts } from "./gate-facts";
+import { nextStageNeeds } from "../../lib/stages/gates";
+import type { Stage } from "../../lib/stages/stages";
+import type { SessionUser } from "../../server/session";
+
+export type BoardPerson = { id: string; name: string };
+
+/** One card on the board, ready to send as JSON. */
+export type BoardCard = {
+  id: string;
+  title: string;
+  clientName: string;
+  siteTown: string;
+  stage: Stage;
+  position: string;
+  version: number;
+  stageEnteredAt: string;
+  targetInstallDate: string | null;
+  leadId: string | null;
+  leadName: string | null;
+  crew: BoardPerson[];
+  /** What the gate into the next stage is missing: null in the last stage, [] when ready. */
+  nextNeeds: string[] | null;
+};
+
+export type BoardData = { cards: BoardCard[]; people: BoardPerson[] };
+
+type Row = {
+  id: string;
+  title: string;
+  client_name: string;
+  site_town: string;
+  stage: Stage;
+  position: string;
+  version: number;
+  stage_entered_at: Date | string;
+  target_install_date: string | null;
+  lead_id: string | null;
+  lead_name: string | null;
+  crew: BoardPerson[] | null;
+};
+
+/**
+ * The board as the caller may see it, in column order. A fixed number of queries however many
+ * cards, run side by side: the cards with their people, the gate records of all of them, and the
+ * cycle inputs (rules, starts, readings, doses) of the cards in cycling.
+ */
+export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new Date()): Promise<BoardData> {
+  const visible = visibleProjectsWhere(user);
+  const rowsQuery = queryPrepared<Row>("board-cards", sql`
+    select ${projects.id} as id, ${projects.title} as title, c.name as client_name, ${projects.siteTown} as site_town,
+      ${projects.stage} as stage, ${projects.position} as position, ${projects.version} as version,
+      ${projects.stageEnteredAt} as stage_entered_at, ${projects.targetInstallDate}::text as target_install_date,
+      ${projects.leadId} as lead_id, l.name as lead_name,
+      cr.crew
+    from ${projects}
+    join users c on c.id = ${projects.clientId}
+    left join users l on l.id = ${projects.leadId}
+    left join (
+      select pc.project_id, json_agg(json_build_object('id', u.id, 'name', u.name) order by u.name) as crew
+      from project_crew pc join users u on u.id = pc.user_id group by pc.project_id
+    ) cr on cr.project_id = ${projects.id}
+    where ${visible}
+    order by ${projects.stage}, ${projects.position} collate "C", ${projects.id}
+  `);
+  // The cards, their records and the cycling cards' readings are read side by side: one round trip.
+  const [res, records, cycleInputs] = await Promise.all([
+    rowsQuery,
+    loadRecordFacts({ where: visible }),
+    loadCycleInputs({ where: and(visible, eq(projects.stage, "cycling"))! }),
+  ]);
+  const rows = res;
+  const people = new Map<string, BoardPerson>();
+  const cards = rows.map((r): BoardCard => {
+    const crew = r.crew ?? [];
+    for (const p of crew) people.set(p.id, p);
+    if (r.lead_id && r.lead_name) people.set(r.lead_id, { id: r.lead_id, name: r.lead_name });
+    const rec = records.get(r.id);
+    const f = rec ? toGateFacts(rec, r.stage === "cycling" ? cycleVerdict(cycleInputs, r.id, now) : null) : null;
+    return {
+      id: r.id,
+      title: r.title,
+      clientName: r.client_name,
+      siteTown: r.site_town,
+      stage: r.stage,
+      position: r.position,
+      version: r.version,
+      stageEnteredAt: new Date(r.stage_entered_at).toISOString(),
+      targetInstallDate: r.target_install_date,
+      leadId: r.lead_id,
+      leadName: r.lead_name,
+      crew,
+      nextNeeds: f ? nextStageNeeds(r.stage, f) : null,
+    };
+  });
+  return { cards, people: [...people.values()].sort((a, b) => a.name.localeCompare(b.name)) };
+}
