@@ -1,0 +1,174 @@
+"use client";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { useRouter } from "next/navigation";
+import { get, useForm, type FieldPath, type Resolver } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { sendJson } from "@/lib/http/send-json";
+import { buttonStyles } from "@/components/ui/button-styles";
+import { Caution } from "@/components/ui/caution";
+import { designFromForm, designToForm, type DesignFormValues } from "@/lib/survey/design-form";
+import { loadCheck, type StoredDesign } from "@/lib/survey/load-check";
+import type { SiteSurvey } from "@/lib/survey/site-survey.schema";
+import { tankDesignSchema } from "@/lib/survey/tank-design.schema";
+import { ALL_CAUTIONS } from "@/lib/tank/cautions";
+import { unitLabel, type UnitSystem } from "@/lib/tank/units";
+import { FieldGroup, NumberInput, SelectInput } from "./form-bits";
+import { LoadCautions, LoadResults } from "./load-results";
+
+const opts = (pairs: [string, string][]) => pairs.map(([value, label]) => ({ value, label }));
+const SHAPES = opts([["rectangular", "Rectangular"], ["cylinder", "Cylinder"], ["bowfront", "Bow-front"]]);
+const MATERIALS = opts([["glass", "Float glass"], ["low-iron glass", "Low-iron glass"], ["acrylic", "Acrylic"]]);
+const WATER = opts([["fresh", "Fresh water"], ["salt", "Salt water"]]);
+const SUBSTRATES = opts([["sand", "Sand"], ["gravel", "Gravel"], ["aqua soil", "Aqua soil"], ["none", "None (bare bottom)"]]);
+const FOOTPRINTS = opts([["solid", "Solid base"], ["legs", "Legs"]]);
+
+type Path = FieldPath<DesignFormValues>;
+
+/** The tank and stand design, with the load check worked out beside it as you type. */
+export function DesignForm(props: { projectId: string; stored: StoredDesign | null; survey: Partial<SiteSurvey> | null; system: UnitSystem }) {
+  const { projectId, stored, survey, system } = props;
+  const router = useRouter();
+  const [status, setStatus] = useState<{ ok: boolean; text: string } | null>(null);
+  const [warnings, setWarnings] = useState<string[]>([]);
+  const storedRef = useRef(stored);
+  storedRef.current = stored;
+  // Text in the person's units goes through the same schema as the server's (which runs validateDesign).
+  const resolver = useMemo<Resolver<DesignFormValues>>(
+    () => async (values, ctx, options) => zodResolver(tankDesignSchema)(designFromForm(values, system, storedRef.current) as never, ctx, options as never) as never,
+    [system],
+  );
+  const { register, handleSubmit, formState, setError, watch, getValues, reset } = useForm<DesignFormValues>({
+    resolver,
+    mode: "onBlur",
+    defaultValues: designToForm(stored, system),
+  });
+
+  const shownSystem = useRef(system);
+  useEffect(() => {
+    if (shownSystem.current === system) return;
+    const si = designFromForm(getValues(), shownSystem.current, storedRef.current);
+    reset(designToForm(si as unknown as StoredDesign, system));
+    shownSystem.current = system;
+  }, [system, getValues, reset]);
+
+  const values = watch();
+  const live = useMemo(() => {
+    const parsed = tankDesignSchema.safeParse(designFromForm(values, system, stored));
+    return parsed.success ? { results: loadCheck(parsed.data as StoredDesign, survey) } : { problems: parsed.error.issues.map((i) => i.message) };
+  }, [values, system, stored, survey]);
+
+  const e = formState.errors;
+  const u = { length: unitLabel("length", system), mass: unitLabel("mass", system), volume: unitLabel("volume", system), temp: unitLabel("temperature", system) };
+  const num = (path: Path, label: string, hint?: string) => (
+    <NumberInput id={`design-${path.replaceAll(".", "-")}`} label={label} reg={register(path)} error={get(e, path)} hint={hint} />
+  );
+  const select = (path: Path, label: string, options: { value: string; label: string }[]) => (
+    <SelectInput id={`design-${path.replaceAll(".", "-")}`} label={label} reg={register(path)} error={get(e, path)} options={options} />
+  );
+
+  const onSubmit = handleSubmit(
+    async (design) => {
+      setStatus(null);
+      const res = await sendJson<{ warnings: string[] }>(`/api/projects/${projectId}/design`, "PUT", design);
+      if (!res.ok) {
+        for (const [field, message] of Object.entries(res.fields ?? {})) setError(field as Path, { message });
+        setStatus({ ok: false, text: `${res.error} Nothing was saved; your entries are still here.` });
+        return;
+      }
+      setWarnings(res.data.warnings);
+      setStatus({ ok: true, text: "Design saved." });
+      router.refresh();
+    },
+    () => setStatus({ ok: false, text: "Some entries need attention (marked in the form). Nothing was saved yet." }),
+  );
+
+  const shape = values.shape;
+  const standGroupError = (get(e, "stand") as { message?: string } | undefined)?.message ?? (get(e, "stand.footprint") as { message?: string } | undefined)?.message;
+  return (
+    <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_minmax(0,26rem)]">
+      <form onSubmit={onSubmit} noValidate aria-labelledby="design-heading" className="flex flex-col gap-5 rounded-2xl border border-line bg-card p-5">
+        <h2 id="design-heading" className="text-lg font-semibold">
+          Tank and stand design
+        </h2>
+        <FieldGroup title="Tank" hint="Outside sizes.">
+          {select("shape", "Shape", SHAPES)}
+          {shape === "cylinder" ? num("diameterMm", `Diameter (${u.length})`) : num("lengthMm", `Length (${u.length})`)}
+          {shape !== "cylinder" && num("widthMm", shape === "bowfront" ? `Depth at the ends (${u.length})` : `Depth, front to back (${u.length})`)}
+          {shape === "bowfront" && num("bowDepthMm", `Bow depth (${u.length})`, "Extra depth at the middle of the curved front.")}
+          {num("heightMm", `Height (${u.length})`)}
+        </FieldGroup>
+        <FieldGroup title="Panels">
+          {select("panelMaterial", "Panel material", MATERIALS)}
+          {num("panelThicknessMm", `Panel thickness (${u.length})`)}
+          {num("bottomThicknessMm", `Bottom thickness (${u.length}, optional)`, "Leave empty when the same as the sides.")}
+        </FieldGroup>
+        <FieldGroup title="Water">
+          {num("waterBelowRimMm", `Water level below the rim (${u.length})`)}
+          {select("water", "Water", WATER)}
+          {values.water === "salt" && num("salinityPsu", "Salinity (psu, optional)", "Natural seawater is about 35.")}
+          {num("temperatureC", `Water temperature (${u.temp})`)}
+        </FieldGroup>
+        <FieldGroup title="Contents">
+          {select("substrate.type", "Substrate", SUBSTRATES)}
+          {values.substrate?.type !== "none" && num("substrate.depthMm", `Substrate depth (${u.length})`)}
+          {num("rockMassKg", `Rock (${u.mass})`)}
+          {num("sumpVolumeL", `Sump water (${u.volume})`)}
+        </FieldGroup>
+        <FieldGroup title="Stand">
+          {num("stand.massKg", `Stand weight (${u.mass})`, "Include the sump's glass, pumps, lights and cabinet contents.")}
+          {num("stand.lengthMm", `Stand length (${u.length})`)}
+          {num("stand.widthMm", `Stand depth (${u.length})`)}
+          {num("stand.heightMm", `Stand height (${u.length}, optional)`, "Used only to check the way in.")}
+          {select("stand.footprint.kind", "Stand stands on", FOOTPRINTS)}
+          {values.stand?.footprint?.kind === "legs" ? (
+            <>
+              {num("stand.footprint.count", "Number of legs")}
+              {num("stand.footprint.legLengthMm", `Each leg's foot, length (${u.length})`)}
+              {num("stand.footprint.legWidthMm", `Each leg's foot, width (${u.length})`)}
+            </>
+          ) : (
+            <>
+              {num("stand.footprint.lengthMm", `Base length (${u.length})`)}
+              {num("stand.footprint.widthMm", `Base depth (${u.length})`)}
+            </>
+          )}
+          {standGroupError && <p className="text-sm font-medium text-danger sm:col-span-2">{standGroupError}</p>}
+        </FieldGroup>
+        <div className="flex flex-wrap items-center gap-3">
+          <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
+            {formState.isSubmitting ? "Saving…" : "Save design"}
+          </button>
+          {status && (
+            <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
+              {status.text}
+            </p>
+          )}
+        </div>
+        {warnings.map((w) => (
+          <Caution key={w}>{w}</Caution>
+        ))}
+      </form>
+
+      <aside aria-labelledby="results-heading" className="flex flex-col gap-3 rounded-2xl border border-line bg-card p-5 xl:sticky xl:top-16 xl:self-start">
+        <h2 id="results-heading" className="text-lg font-semibold">
+          Load check
+        </h2>
+        {"results" in live && live.results ? (
+          <LoadResults results={live.results} system={system} />
+        ) : (
+          <>
+            <p className="text-sm text-muted">The figures appear here once the design's sizes are filled in and make sense.</p>
+            {values.lengthMm || values.diameterMm ? (
+              <ul className="list-disc pl-5 text-sm text-ink/80" data-testid="design-problems">
+                {[...new Set(live.problems)].slice(0, 6).map((p) => (
+                  <li key={p}>{p}</li>
+                ))}
+              </ul>
+            ) : null}
+            <LoadCautions cautions={ALL_CAUTIONS} />
+          </>
+        )}
+      </aside>
+    </div>
+  );
+}

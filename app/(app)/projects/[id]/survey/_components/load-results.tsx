@@ -1,0 +1,169 @@
+import type { ReactNode } from "react";
+import { Caution } from "@/components/ui/caution";
+import type { LoadCheckResults } from "@/lib/survey/load-check";
+import { formatArea, formatBoth, formatNumber, formatQuantity } from "@/lib/survey/format";
+import { DEFAULT_GLASS_SAFETY_FACTOR, ACRYLIC_DESIGN_STRESS_MPA, FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA } from "@/lib/tank/glass-strength";
+import type { UnitSystem } from "@/lib/tank/units";
+
+const VERDICT = {
+  under: { label: "Under the rated load", cls: "bg-ok-soft text-ok" },
+  over: { label: "Over the rated load", cls: "bg-caution-soft text-caution" },
+  "far over": { label: "Far over the rated load", cls: "bg-danger-soft text-danger" },
+} as const;
+
+function Row({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
+  return (
+    <div className="flex justify-between gap-3 border-b border-line/60 py-1 last:border-0">
+      <dt className="text-muted">{label}</dt>
+      <dd className="num text-right font-medium" data-testid={testId}>
+        {children}
+      </dd>
+    </div>
+  );
+}
+
+function Block({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <section className="flex flex-col gap-1 break-inside-avoid">
+      <h3 className="text-sm font-semibold uppercase tracking-wide text-muted">{title}</h3>
+      {children}
+    </section>
+  );
+}
+
+/** The load check's figures and verdicts, for the section page (live) and the printable sheet. */
+export function LoadResults(props: { results: LoadCheckResults; system: UnitSystem; showCautions?: boolean; twoColumns?: boolean }) {
+  const { results, system, showCautions = true, twoColumns = false } = props;
+  const { load, floor, glass, access } = results;
+  const mass = (kg: number) => formatQuantity("mass", kg, system);
+  return (
+    <div className={twoColumns ? "gap-8 text-sm md:columns-2 print:columns-2 [&>*]:mb-5" : "flex flex-col gap-5 text-sm"} data-testid="load-results">
+      <Block title="Water">
+        <dl>
+          <Row label="Gross volume (bottom to rim)">{formatBoth("volume", load.grossVolumeL, system)}</Row>
+          <Row label="Net water volume" testId="net-volume">
+            {formatBoth("volume", load.netVolumeL, system)}
+          </Row>
+          <Row label="Water density">{formatNumber(load.waterDensityKgM3, 1)} kg/m³</Row>
+        </dl>
+      </Block>
+
+      <Block title="Weight">
+        <dl>
+          <Row label="Water">{mass(load.waterMassKg)}</Row>
+          <Row label="Panels">{mass(load.glassMassKg)}</Row>
+          <Row label="Substrate">{mass(load.substrateMassKg)}</Row>
+          <Row label="Rock">{mass(load.rockMassKg)}</Row>
+          <Row label="Sump water">{mass(load.sumpWaterMassKg)}</Row>
+          <Row label="Stand">{mass(load.standMassKg)}</Row>
+          <Row label="Total installed" testId="total-mass">
+            <strong>{formatBoth("mass", load.totalInstalledMassKg, system)}</strong>
+          </Row>
+        </dl>
+      </Block>
+
+      <Block title="On the floor">
+        <dl>
+          <Row label="Stand footprint">{formatArea(load.footprintAreaM2, system)}</Row>
+          <Row label="Floor pressure" testId="floor-pressure">
+            {formatNumber(load.floorPressureKPa, 2)} kPa ({formatNumber(load.floorPressurePsf, 0)} lb/ft²)
+          </Row>
+          {load.loadPerLegKg !== null && <Row label="Load per leg">{formatBoth("mass", load.loadPerLegKg, system)}</Row>}
+          {load.legContactPressureKPa !== null && <Row label="Pressure under each leg">{formatNumber(load.legContactPressureKPa, 0)} kPa</Row>}
+        </dl>
+      </Block>
+
+      <Block title="Floor screening">
+        {floor ? (
+          <div className="flex flex-col gap-2">
+            <p className="flex flex-wrap items-center gap-2">
+              <span className={`rounded-full px-2.5 py-0.5 text-xs font-semibold ${VERDICT[floor.verdict].cls}`} data-testid="floor-verdict">
+                {VERDICT[floor.verdict].label}
+              </span>
+              <span className="num text-muted">
+                {formatNumber(floor.ratio * 100, 0)} % of {floor.ratedPsf} lb/ft² ({formatNumber(floor.ratedKPa, 2)} kPa), IRC Table R301.5
+              </span>
+            </p>
+            <ul className="list-disc pl-5 text-ink/80">
+              {floor.messages.map((m) => (
+                <li key={m}>{m}</li>
+              ))}
+            </ul>
+          </div>
+        ) : (
+          <p className="text-muted">Fill in the room use and floor type in the survey to screen the floor.</p>
+        )}
+      </Block>
+
+      <Block title="Through the narrowest door">
+        {access ? (
+          <dl>
+            <Row label={`Door ${formatQuantity("length", access.doorWidthMm, system)} × ${formatQuantity("length", access.doorHeightMm, system)}`}>{""}</Row>
+            <Row label="Tank" testId="access-tank">
+              <span className={access.tank.fits ? "" : "text-danger"}>{access.tank.message}</span>
+            </Row>
+            <Row label="Stand">
+              {access.stand ? <span className={access.stand.fits ? "" : "text-danger"}>{access.stand.message}</span> : <span className="text-muted">Enter the stand height to check it.</span>}
+            </Row>
+          </dl>
+        ) : (
+          <p className="text-muted">Fill in the narrowest door's width and height in the survey to check the way in.</p>
+        )}
+      </Block>
+
+      <Block title="Panel thickness">
+        <table className="w-full text-left">
+          <thead className="text-xs text-muted">
+            <tr>
+              <th className="py-1 font-medium">Panel</th>
+              <th className="py-1 text-right font-medium">Needs</th>
+              <th className="py-1 text-right font-medium">Entered</th>
+              <th className="py-1 text-right font-medium">Verdict</th>
+            </tr>
+          </thead>
+          <tbody>
+            {glass.panels.map((p) => (
+              <tr key={p.panel} className="border-t border-line/60" title={p.message}>
+                <td className="py-1">{p.panel[0].toUpperCase() + p.panel.slice(1)}</td>
+                <td className="num py-1 text-right">{formatNumber(p.requiredMm, 1)} mm</td>
+                <td className="num py-1 text-right">{formatNumber(p.enteredMm, 1)} mm</td>
+                <td className={`py-1 text-right font-semibold ${p.ok ? "text-ok" : "text-danger"}`}>{p.ok ? "Enough" : "Too thin"}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        <p className="text-xs text-muted">
+          Walls checked full to the rim. Glass: modulus of rupture {FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA} MPa with a safety factor of {DEFAULT_GLASS_SAFETY_FACTOR} (common
+          practice); acrylic: {ACRYLIC_DESIGN_STRESS_MPA} MPa long-term design stress. Plate coefficients from Roark&apos;s Formulas for Stress and Strain (from memory).
+        </p>
+        {!glass.ok && <Caution tone="danger">{glass.panels.filter((p) => !p.ok).map((p) => p.message).join(" ")}</Caution>}
+      </Block>
+
+      {results.siteWarnings.length > 0 && (
+        <Block title="Check before the build">
+          <ul className="flex flex-col gap-2">
+            {results.siteWarnings.map((w) => (
+              <li key={w}>
+                <Caution>{w}</Caution>
+              </li>
+            ))}
+          </ul>
+        </Block>
+      )}
+
+      {showCautions && <LoadCautions cautions={results.cautions} />}
+    </div>
+  );
+}
+
+export function LoadCautions({ cautions }: { cautions: readonly string[] }) {
+  return (
+    <Caution title="Before anyone relies on these figures">
+      <ul className="list-disc pl-5" data-testid="load-cautions">
+        {cautions.map((c) => (
+          <li key={c}>{c}</li>
+        ))}
+      </ul>
+    </Caution>
+  );
+}
