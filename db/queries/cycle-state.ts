@@ -3,13 +3,22 @@ import { and, asc, desc, eq, isNull } from "drizzle-orm";
 import { db, type Db, type Tx } from "../index";
 import { ammoniaDoses, company, stageEvents, waterTests } from "../schema";
 import { evaluateCycle, type CycleEvaluation } from "../../lib/cycling/evaluate-cycle";
-import type { CycleRules } from "../../lib/cycling/cycle-rules";
+import { DEFAULT_CYCLE_RULES, validateCycleRules, type CycleRules } from "../../lib/cycling/cycle-rules";
 import type { AmmoniaDose, WaterTest } from "../../lib/cycling/readings";
 
-/** The company's cycle rules as stored (a partial override of the defaults). */
+/**
+ * The company's cycle rules as stored (a partial override of the defaults). A stored value that
+ * fails today's checks is left out, so the default applies instead of the gate failing outright.
+ */
 export async function getCompanyCycleRules(conn: Db | Tx = db()): Promise<Partial<CycleRules>> {
   const [row] = await conn.select({ rules: company.cycleRules }).from(company).limit(1);
-  return (row?.rules ?? {}) as Partial<CycleRules>;
+  const stored = (row?.rules ?? {}) as Partial<Record<keyof CycleRules, unknown>>;
+  const bad = new Set(validateCycleRules(stored).map((p) => p.field));
+  const rules: Partial<Record<keyof CycleRules, unknown>> = {};
+  for (const key of Object.keys(DEFAULT_CYCLE_RULES) as (keyof CycleRules)[]) {
+    if (stored[key] !== undefined && !bad.has(key)) rules[key] = stored[key];
+  }
+  return rules as Partial<CycleRules>;
 }
 
 /** When the project last entered cycling, or null if it never has. */

@@ -1,0 +1,87 @@
+import type { Metadata } from "next";
+import { requirePageUser } from "@/server/session";
+import { requirePageProject } from "@/server/page-project";
+import { getCycleEvaluation, getCycleStartedAt } from "@/db/queries/cycle-state";
+import { getDesignVolume, getUnitSystem, listDoses, listWaterTests } from "@/db/queries/water";
+import { listStockingBatches } from "@/db/queries/stocking";
+import { canOnProject } from "@/lib/auth/permissions";
+import { EmptyState } from "@/components/ui/empty-state";
+import { CycleSummary } from "./_components/cycle-summary";
+import { CycleChart, type ChartPoint } from "./_components/cycle-chart";
+import { ReadingsTable } from "./_components/readings-table";
+import { WaterTestForm } from "./_components/water-test-form";
+import { DosePanel } from "./_components/dose-panel";
+import { StockingPanel } from "./_components/stocking-panel";
+import { toReadingView, toDoseView, toBatchView } from "./_components/views";
+
+export const metadata: Metadata = { title: "Water & cycling" };
+
+const DAY_MS = 86_400_000;
+
+export default async function WaterPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const user = await requirePageUser();
+  const { project, relation } = await requirePageProject(id, user);
+  const now = new Date();
+  const [tests, evaluation, startedAt, unitSystem] = await Promise.all([
+    listWaterTests(project.id),
+    getCycleEvaluation(project.id, now),
+    getCycleStartedAt(project.id),
+    getUnitSystem(user.id),
+  ]);
+  const canDose = canOnProject(relation, "log_dose");
+  const canVoid = canOnProject(relation, "void_water_test");
+  const canStock = canOnProject(relation, "record_stocking");
+  const fishStage = project.stage === "first_stocking" || project.stage === "in_service";
+  const [doses, volume, batches] = await Promise.all([
+    canDose ? listDoses(project.id) : Promise.resolve([]),
+    canDose ? getDesignVolume(project.id) : Promise.resolve(null),
+    listStockingBatches(project.id),
+  ]);
+
+  const counted = tests.filter((t) => !t.voided).reverse();
+  const chartStart = startedAt ?? (counted[0]?.takenAt ?? now);
+  const points: ChartPoint[] = counted.map((t) => ({
+    day: Math.round(((t.takenAt.getTime() - chartStart.getTime()) / DAY_MS) * 10) / 10,
+    at: t.takenAt.toISOString(),
+    ammonia: t.ammoniaMgL,
+    nitrite: t.nitriteMgL,
+    nitrate: t.nitrateMgL,
+  }));
+
+  return (
+    <div className="flex flex-col gap-6">
+      <CycleSummary
+        evaluation={evaluation}
+        readings={tests}
+        stage={project.stage}
+        notifiedAt={project.cycleReadyNotifiedAt}
+        forClient={user.role === "client"}
+        now={now}
+      />
+
+      <section aria-labelledby="chart-heading" className="flex flex-col gap-3 rounded-2xl border border-line bg-card p-5">
+        <h2 id="chart-heading" className="text-lg font-semibold">
+          Ammonia, nitrite and nitrate
+        </h2>
+        {points.length ? (
+          <CycleChart points={points} today={Math.floor((now.getTime() - chartStart.getTime()) / DAY_MS)} />
+        ) : (
+          <EmptyState title="No water tests yet — log the first one below.">
+            The chart fills in as tests are logged: ammonia first, then nitrite, then nitrate as the bacteria establish.
+          </EmptyState>
+        )}
+      </section>
+
+      <WaterTestForm projectId={project.id} unitSystem={unitSystem} />
+
+      <ReadingsTable projectId={project.id} rows={tests.map(toReadingView)} unitSystem={unitSystem} canVoid={canVoid} />
+
+      {(fishStage || batches.length > 0) && (
+        <StockingPanel projectId={project.id} batches={batches.map(toBatchView)} canRecord={canStock && fishStage} isLead={user.role === "lead"} />
+      )}
+
+      {canDose && <DosePanel projectId={project.id} doses={doses.map(toDoseView)} designVolume={volume} unitSystem={unitSystem} canVoid={canVoid} />}
+    </div>
+  );
+}
