@@ -4,6 +4,22 @@ import fs from "node:fs";
 // @ts-expect-error no type declarations
 import S3rver from "s3rver";
 
+/**
+ * Lets the app's pages PUT to presigned URLs and show presigned images from another origin, as a
+ * real bucket's CORS rules would. Any origin is fine for a store that only listens on 127.0.0.1.
+ */
+const CORS = `<CORSConfiguration>
+  <CORSRule>
+    <AllowedOrigin>*</AllowedOrigin>
+    <AllowedMethod>GET</AllowedMethod>
+    <AllowedMethod>HEAD</AllowedMethod>
+    <AllowedMethod>PUT</AllowedMethod>
+    <AllowedHeader>*</AllowedHeader>
+    <ExposeHeader>ETag</ExposeHeader>
+    <MaxAgeSeconds>3000</MaxAgeSeconds>
+  </CORSRule>
+</CORSConfiguration>`;
+
 export async function startObjectStore({ port, directory, bucket }: { port: number; directory: string; bucket: string }) {
   fs.mkdirSync(directory, { recursive: true });
   const server = new S3rver({
@@ -11,7 +27,7 @@ export async function startObjectStore({ port, directory, bucket }: { port: numb
     port,
     directory,
     silent: true,
-    configureBuckets: [{ name: bucket, configs: [] }],
+    configureBuckets: [{ name: bucket, configs: [CORS] }],
     allowMismatchedSignatures: false,
   });
   await server.run();

@@ -1,0 +1,114 @@
+"use client";
+import { useCallback, useEffect, useState } from "react";
+import { STAGE_LABELS, type Stage } from "@/lib/stages/stages";
+import { percent } from "@/lib/install/checklist-progress";
+import { pendingLabel, type QueuedTick } from "@/lib/install/tick-queue";
+import { buttonStyles } from "@/components/ui/button-styles";
+import { useTickQueue } from "./use-tick-queue";
+import { ChecklistItemRow } from "./checklist-item-row";
+import type { DayItem, DayState } from "./checklist-types";
+
+type Props = {
+  projectId: string;
+  stages: Stage[];
+  items: DayItem[];
+  initial: Record<string, DayState>;
+  me: { name: string; isLead: boolean };
+};
+
+/** The day's checklist, one stage after another, ticked on a phone and saved even on a poor signal. */
+export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
+  const [states, setStates] = useState<Record<string, DayState>>(initial);
+  const [refusals, setRefusals] = useState<Record<string, string>>({});
+  const [confirmed, setConfirmed] = useState<Record<string, DayState>>(initial);
+
+  const onSaved = useCallback((t: { itemId: string; at: string }, q: QueuedTick) => {
+    const saved: DayState = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, at: t.at, pending: false };
+    setConfirmed((c) => ({ ...c, [q.itemId]: saved }));
+    setStates((s) => (s[q.itemId]?.pending && s[q.itemId]?.at === q.queuedAt ? { ...s, [q.itemId]: saved } : s));
+  }, [me.name]);
+
+  const onRefused = useCallback((q: QueuedTick, error: string) => {
+    setRefusals((r) => ({ ...r, [q.itemId]: `Not saved: ${error}` }));
+    setStates((s) => {
+      const next = { ...s };
+      if (confirmed[q.itemId]) next[q.itemId] = confirmed[q.itemId];
+      else delete next[q.itemId];
+      return next;
+    });
+  }, [confirmed]);
+
+  const { queue, enqueue, retryNow, lastError } = useTickQueue(projectId, { onSaved, onRefused });
+
+  // Ticks left on this phone from an earlier visit show as pending until they are sent.
+  useEffect(() => {
+    if (!queue.length) return;
+    setStates((s) => {
+      const next = { ...s };
+      for (const q of queue) {
+        if (!next[q.itemId]?.pending) next[q.itemId] = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, at: q.queuedAt, pending: true };
+      }
+      return next;
+    });
+  }, [queue, me.name]);
+
+  function submit(itemId: string, t: { done: boolean; note: string | null; value: number | null; attachmentId: string | null }) {
+    setRefusals((r) => {
+      const { [itemId]: _gone, ...rest } = r;
+      return rest;
+    });
+    const q = enqueue({ itemId, ...t });
+    setStates((s) => ({ ...s, [itemId]: { ...t, byName: me.name, at: q.queuedAt, pending: true } }));
+  }
+
+  return (
+    <div className="flex flex-col gap-6">
+      {queue.length > 0 && (
+        <div role="status" data-testid="pending-ticks" className="sticky top-14 z-20 flex flex-wrap items-center gap-3 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm">
+          <span className="font-semibold text-caution">{pendingLabel(queue.length)}</span>
+          <span className="text-ink/80">{lastError ?? "Sending…"}</span>
+          <button type="button" onClick={retryNow} className={`${buttonStyles.secondary} ml-auto min-h-11`}>
+            Try now
+          </button>
+        </div>
+      )}
+      {stages.map((stage) => {
+        const list = items.filter((i) => i.stage === stage);
+        if (!list.length) return null;
+        const done = list.filter((i) => states[i.id]?.done).length;
+        const pct = percent(done, list.length);
+        const headingId = `stage-${stage}`;
+        return (
+          <section key={stage} aria-labelledby={headingId} className="flex flex-col gap-3" data-testid={`checklist-${stage}`}>
+            <div className="flex flex-col gap-1">
+              <div className="flex items-baseline justify-between gap-2">
+                <h2 id={headingId} className="text-lg font-semibold">
+                  {STAGE_LABELS[stage]}
+                </h2>
+                <span className="text-sm tabular-nums text-muted" data-testid={`progress-${stage}`}>
+                  {done} of {list.length} done
+                </span>
+              </div>
+              <div role="progressbar" aria-label={`${STAGE_LABELS[stage]} progress`} aria-valuemin={0} aria-valuemax={100} aria-valuenow={pct} className="h-2.5 overflow-hidden rounded-full bg-paper">
+                <div className={`h-full rounded-full ${pct === 100 ? "bg-ok" : "bg-accent"}`} style={{ width: `${pct}%` }} />
+              </div>
+            </div>
+            <ol className="flex flex-col gap-2">
+              {list.map((item) => (
+                <ChecklistItemRow
+                  key={item.id}
+                  projectId={projectId}
+                  item={item}
+                  state={states[item.id] ?? null}
+                  refusal={refusals[item.id] ?? null}
+                  isLead={me.isLead}
+                  onSubmit={(t) => submit(item.id, t)}
+                />
+              ))}
+            </ol>
+          </section>
+        );
+      })}
+    </div>
+  );
+}

@@ -1,0 +1,148 @@
+"use client";
+import { useId, useState } from "react";
+import { format } from "date-fns";
+import { checkMeasuredValue } from "@/lib/install/checklist-progress";
+import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { UploadButton, type UploadedFile } from "@/components/ui/upload-button";
+import { ItemHistory } from "./item-history";
+import type { DayItem, DayState } from "./checklist-types";
+
+type Submit = (t: { done: boolean; note: string | null; value: number | null; attachmentId: string | null }) => void;
+
+/** One checklist item: tick it (with a value or photo where asked), or, for the lead, untick with a reason. */
+export function ChecklistItemRow({ projectId, item, state, refusal, isLead, onSubmit }: { projectId: string; item: DayItem; state: DayState | null; refusal: string | null; isLead: boolean; onSubmit: Submit }) {
+  const id = useId();
+  const [note, setNote] = useState("");
+  const [value, setValue] = useState("");
+  const [photo, setPhoto] = useState<UploadedFile | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const [unticking, setUnticking] = useState(false);
+  const [showHistory, setShowHistory] = useState(false);
+  const done = state?.done === true;
+
+  function tick() {
+    setError(null);
+    let measured: number | null = null;
+    if (item.measure) {
+      measured = value.trim() === "" ? null : Number(value.replace(",", "."));
+      const problem = checkMeasuredValue(item.measure, measured);
+      if (problem) return setError(problem);
+    }
+    if (item.needsPhoto && !photo) return setError("Attach a photo first: this item needs one.");
+    onSubmit({ done: true, note: note.trim() || null, value: measured, attachmentId: photo?.id ?? null });
+    setNote("");
+  }
+
+  function untick() {
+    if (!note.trim()) return setError("Say why it's being unticked.");
+    setError(null);
+    onSubmit({ done: false, note: note.trim(), value: null, attachmentId: null });
+    setNote("");
+    setValue("");
+    setPhoto(null);
+    setUnticking(false);
+  }
+
+  return (
+    <li className={`rounded-xl border bg-card p-3 ${done ? "border-ok/40" : "border-line"}`} data-testid="checklist-item" data-item={item.label} data-done={done ? "true" : "false"}>
+      <div className="flex items-start gap-3">
+        <span aria-hidden="true" className={`mt-0.5 flex h-7 w-7 shrink-0 items-center justify-center rounded-full border-2 text-sm font-bold ${done ? "border-ok bg-ok text-white" : "border-line text-transparent"}`}>
+          ✓
+        </span>
+        <div className="flex min-w-0 flex-1 flex-col gap-1">
+          <p className="font-medium">{item.label}</p>
+          {item.hint && <p className="text-sm text-muted">{item.hint}</p>}
+          {(item.needsPhoto || item.measure) && (
+            <p className="text-xs font-semibold text-muted">
+              {item.needsPhoto && "Photo needed"}
+              {item.needsPhoto && item.measure && " · "}
+              {item.measure && `Measure in ${item.measure.unit} (${item.measure.min}–${item.measure.max})`}
+            </p>
+          )}
+          {state && (
+            <p className="text-sm" data-testid="item-status">
+              {state.pending ? (
+                <span className="rounded bg-caution-soft px-1.5 py-0.5 text-xs font-semibold text-caution">Not saved yet</span>
+              ) : (
+                <span className="text-xs font-semibold text-ok">Saved</span>
+              )}{" "}
+              <span className="text-muted">
+                {state.done ? "Done" : "Unticked"} by {state.byName} · <time dateTime={state.at}>{format(new Date(state.at), "d MMM, HH:mm")}</time>
+                {state.value !== null && item.measure && ` · ${state.value} ${item.measure.unit}`}
+                {state.note && ` · “${state.note}”`}
+              </span>
+            </p>
+          )}
+          {state?.attachmentId && (
+            <a href={`/api/attachments/${state.attachmentId}?variant=full`} target="_blank" rel="noreferrer" className="w-fit">
+              {/* eslint-disable-next-line @next/next/no-img-element */}
+              <img src={`/api/attachments/${state.attachmentId}?variant=thumb`} alt={`Photo for: ${item.label}`} className="h-20 rounded-lg border border-line object-cover" />
+            </a>
+          )}
+        </div>
+      </div>
+
+      {!done && (
+        <div className="mt-3 flex flex-col gap-2">
+          {item.measure && (
+            <div className="flex flex-col gap-1">
+              <label htmlFor={`${id}-value`} className="text-sm font-medium">
+                Measured value ({item.measure.unit})
+              </label>
+              <input id={`${id}-value`} inputMode="decimal" className={`${inputStyles} min-h-11`} value={value} onChange={(e) => setValue(e.target.value)} aria-invalid={!!error} />
+            </div>
+          )}
+          {item.needsPhoto &&
+            (photo ? (
+              <p className="text-sm text-ok">Photo attached: {photo.fileName}</p>
+            ) : (
+              <UploadButton projectId={projectId} stage={item.stage} caption={item.label} label="Attach a photo" onUploaded={setPhoto} />
+            ))}
+          <label htmlFor={`${id}-note`} className="sr-only">
+            Note for {item.label} (optional)
+          </label>
+          <input id={`${id}-note`} className={`${inputStyles} min-h-11`} placeholder="Note (optional)" value={note} onChange={(e) => setNote(e.target.value)} />
+          <button type="button" onClick={tick} className={`${buttonStyles.primary} min-h-11 w-full`} aria-label={`Mark done: ${item.label}`}>
+            Mark done
+          </button>
+        </div>
+      )}
+
+      {(error || refusal) && (
+        <p role="alert" className="mt-2 text-sm font-medium text-danger">
+          {error ?? refusal}
+        </p>
+      )}
+
+      {state && (
+        <div className="mt-2 flex flex-wrap gap-2">
+          {done && isLead && !state.pending && !unticking && (
+            <button type="button" className={`${buttonStyles.secondary} min-h-11`} onClick={() => setUnticking(true)}>
+              Untick…
+            </button>
+          )}
+          <button type="button" className={`${buttonStyles.secondary} min-h-11`} aria-expanded={showHistory} onClick={() => setShowHistory((v) => !v)}>
+            {showHistory ? "Hide history" : "History"}
+          </button>
+        </div>
+      )}
+      {unticking && (
+        <div className="mt-2 flex flex-col gap-2">
+          <label htmlFor={`${id}-reason`} className="text-sm font-medium">
+            Why untick it?
+          </label>
+          <input id={`${id}-reason`} className={`${inputStyles} min-h-11`} value={note} onChange={(e) => setNote(e.target.value)} />
+          <div className="flex gap-2">
+            <button type="button" className={`${buttonStyles.danger} min-h-11`} onClick={untick}>
+              Untick
+            </button>
+            <button type="button" className={`${buttonStyles.secondary} min-h-11`} onClick={() => setUnticking(false)}>
+              Cancel
+            </button>
+          </div>
+        </div>
+      )}
+      {showHistory && <ItemHistory projectId={projectId} itemId={item.id} unit={item.measure?.unit ?? null} />}
+    </li>
+  );
+}

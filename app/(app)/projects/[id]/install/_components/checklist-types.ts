@@ -1,0 +1,15 @@
+import type { Stage } from "@/lib/stages/stages";
+import type { MeasureSpec } from "@/lib/install/checklist-progress";
+
+export type DayItem = { id: string; stage: Stage; label: string; hint: string | null; needsPhoto: boolean; measure: MeasureSpec | null };
+
+/** An item's state on the day: the newest tick, or one waiting on this phone (pending). */
+export type DayState = {
+  done: boolean;
+  note: string | null;
+  value: number | null;
+  attachmentId: string | null;
+  byName: string;
+  at: string;
+  pending?: boolean;
+};

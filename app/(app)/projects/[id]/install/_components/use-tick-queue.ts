@@ -1,0 +1,104 @@
+"use client";
+import { useCallback, useEffect, useRef, useState } from "react";
+import { sendJson } from "@/lib/http/send-json";
+import { isRetryable, newTickKey, parseQueue, queueStorageKey, retryDelayMs, type QueuedTick } from "@/lib/install/tick-queue";
+
+export type SavedTick = { itemId: string; done: boolean; note: string | null; value: number | null; attachmentId: string | null; at: string };
+
+/**
+ * Keeps unsaved ticks on the device and sends them in order, each with its own key so a save that
+ * reached the server before the connection dropped isn't applied twice. Network failures retry with
+ * backoff (and at once when the browser says it is back online); a refusal is handed back to show.
+ */
+export function useTickQueue(projectId: string, handlers: { onSaved: (t: SavedTick, q: QueuedTick) => void; onRefused: (q: QueuedTick, error: string) => void }) {
+  const storageKey = queueStorageKey(projectId);
+  const [queue, setQueue] = useState<QueuedTick[]>([]);
+  const [lastError, setLastError] = useState<string | null>(null);
+  const queueRef = useRef<QueuedTick[]>([]);
+  const sending = useRef(false);
+  const attempt = useRef(0);
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const handlersRef = useRef(handlers);
+  handlersRef.current = handlers;
+
+  const store = useCallback(
+    (next: QueuedTick[]) => {
+      queueRef.current = next;
+      setQueue(next);
+      try {
+        if (next.length) localStorage.setItem(storageKey, JSON.stringify(next));
+        else localStorage.removeItem(storageKey);
+      } catch {
+        // Storage full or blocked: the queue still lives in memory until the tab closes.
+      }
+    },
+    [storageKey],
+  );
+
+  const flush = useCallback(async () => {
+    if (sending.current) return;
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
+    sending.current = true;
+    try {
+      while (queueRef.current.length) {
+        const q = queueRef.current[0];
+        const res = await sendJson<{ tick: SavedTick }>(`/api/projects/${projectId}/checklist/ticks`, "POST", {
+          itemId: q.itemId,
+          done: q.done,
+          note: q.note,
+          value: q.value,
+          attachmentId: q.attachmentId,
+          clientKey: q.clientKey,
+        });
+        if (!res.ok && isRetryable(res.status)) {
+          setLastError(res.status === 0 ? "No connection. Ticks are kept on this phone and sent when the signal returns." : res.error);
+          const delay = retryDelayMs(attempt.current++);
+          timer.current = setTimeout(() => void flush(), delay);
+          return;
+        }
+        attempt.current = 0;
+        setLastError(null);
+        store(queueRef.current.filter((x) => x.clientKey !== q.clientKey));
+        if (res.ok) handlersRef.current.onSaved(res.data.tick, q);
+        else handlersRef.current.onRefused(q, res.fields ? Object.values(res.fields)[0] : res.error);
+      }
+    } finally {
+      sending.current = false;
+    }
+  }, [projectId, store]);
+
+  useEffect(() => {
+    const saved = parseQueue(localStorage.getItem(storageKey));
+    queueRef.current = saved;
+    setQueue(saved);
+    if (saved.length) void flush();
+    const online = () => {
+      attempt.current = 0;
+      void flush();
+    };
+    window.addEventListener("online", online);
+    return () => {
+      window.removeEventListener("online", online);
+      if (timer.current) clearTimeout(timer.current);
+    };
+  }, [storageKey, flush]);
+
+  const enqueue = useCallback(
+    (t: Omit<QueuedTick, "clientKey" | "queuedAt">) => {
+      const q: QueuedTick = { ...t, clientKey: newTickKey(), queuedAt: new Date().toISOString() };
+      store([...queueRef.current, q]);
+      attempt.current = 0;
+      void flush();
+      return q;
+    },
+    [store, flush],
+  );
+
+  const retryNow = useCallback(() => {
+    attempt.current = 0;
+    void flush();
+  }, [flush]);
+
+  return { queue, enqueue, retryNow, lastError };
+}

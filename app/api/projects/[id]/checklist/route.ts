@@ -1,0 +1,19 @@
+import { NextResponse } from "next/server";
+import { route } from "@/server/route";
+import { requireUser } from "@/server/session";
+import { requireProject } from "@/db/queries/project-access";
+import { listChecklistItems, listProjectTicks } from "@/db/queries/checklists";
+import { latestTicks, stageProgress } from "@/lib/install/checklist-progress";
+import { STAGES } from "@/lib/stages/stages";
+
+/** The company's items and this project's state of each: the newest tick by seq. */
+export const GET = route<{ id: string }>(async (_req, { params }) => {
+  const user = await requireUser("lead", "crew");
+  const { project } = await requireProject({ projectId: (await params).id, user, action: "tick_checklist" });
+  const [items, ticks] = await Promise.all([listChecklistItems(), listProjectTicks(project.id)]);
+  const latest = latestTicks(ticks);
+  return NextResponse.json({
+    items: items.map((i) => ({ ...i, state: latest.get(i.id) ?? null })),
+    progress: stageProgress(STAGES, items, ticks).filter((p) => p.total > 0),
+  });
+});

@@ -1,0 +1,92 @@
+/**
+ * What may be uploaded to a project: the file types we can show or preview, a size limit, and a
+ * file name made safe to store and to show back (the storage key never uses it).
+ */
+
+export const UPLOAD_TYPES = {
+  "image/jpeg": { label: "JPEG photo", image: true },
+  "image/png": { label: "PNG image", image: true },
+  "image/webp": { label: "WebP image", image: true },
+  "application/pdf": { label: "PDF document", image: false },
+} as const;
+
+export type UploadType = keyof typeof UPLOAD_TYPES;
+
+/** Large enough for a full-resolution phone photo or a scanned certificate. */
+export const MAX_UPLOAD_BYTES = 15 * 1024 * 1024;
+export const MAX_FILE_NAME_CHARS = 120;
+
+export function isUploadType(value: string): value is UploadType {
+  return Object.prototype.hasOwnProperty.call(UPLOAD_TYPES, value);
+}
+
+export function isImageType(value: string): boolean {
+  return isUploadType(value) && UPLOAD_TYPES[value].image;
+}
+
+/** The sentence shown when a type is refused; HEIC gets its own advice because phones default to it. */
+export function typeRefusal(contentType: string): string {
+  if (/hei[cf]/i.test(contentType)) {
+    return "HEIC photos can't be previewed here. Set the phone's camera to its most compatible format (JPEG), or share the photo as JPEG, and try again.";
+  }
+  return "Only JPEG, PNG or WebP photos and PDF documents can be uploaded.";
+}
+
+export function sizeRefusal(sizeBytes: number): string | null {
+  if (!(sizeBytes > 0)) return "The file is empty.";
+  if (sizeBytes > MAX_UPLOAD_BYTES) return `The file is ${(sizeBytes / 1024 / 1024).toFixed(1)} MB; the limit is ${MAX_UPLOAD_BYTES / 1024 / 1024} MB.`;
+  return null;
+}
+
+// Control characters (C0, DEL, C1) and the bidirectional overrides that can disguise an extension.
+// eslint-disable-next-line no-control-regex
+const CONTROL = /[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/;
+
+export type NameCheck = { ok: true; name: string } | { ok: false; message: string };
+
+/**
+ * A file name safe to keep and show: any folder part is dropped (only the last segment after a
+ * slash or backslash is kept), characters outside letters, digits, space, dot, dash, underscore and
+ * brackets become "_", and leading dots go so the name can't hide or climb folders. Control
+ * characters are refused outright rather than cleaned, because they only appear in crafted names.
+ */
+export function sanitiseFileName(raw: string): NameCheck {
+  if (CONTROL.test(raw)) return { ok: false, message: "The file name has control characters in it. Rename the file and try again." };
+  const last = raw.split(/[\\/]/).pop() ?? "";
+  let name = last
+    .normalize("NFC")
+    .replace(/[^\p{L}\p{N} ._\-()]/gu, "_")
+    .replace(/^[.\s]+/, "")
+    .replace(/\s+/g, " ")
+    .trim();
+  if (!name || /^[_.\s]*$/.test(name)) return { ok: false, message: "The file needs a name with at least one letter or digit." };
+  if (name.length > MAX_FILE_NAME_CHARS) {
+    const dot = name.lastIndexOf(".");
+    const ext = dot > 0 && name.length - dot <= 10 ? name.slice(dot) : "";
+    name = name.slice(0, MAX_FILE_NAME_CHARS - ext.length) + ext;
+  }
+  return { ok: true, name };
+}
+
+/** The type the file's first bytes show, from each format's signature; null when none matches. */
+export function sniffType(head: Uint8Array): UploadType | null {
+  const at = (i: number, bytes: number[]) => bytes.every((b, k) => head[i + k] === b);
+  if (at(0, [0xff, 0xd8, 0xff])) return "image/jpeg";
+  if (at(0, [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) return "image/png";
+  if (at(0, [0x52, 0x49, 0x46, 0x46]) && at(8, [0x57, 0x45, 0x42, 0x50])) return "image/webp";
+  if (at(0, [0x25, 0x50, 0x44, 0x46, 0x2d])) return "application/pdf";
+  return null;
+}
+
+export type UploadMeta = { fileName: string; contentType: string; sizeBytes: number };
+
+/** Checks a proposed upload; on failure, the field and the sentence to show. */
+export function checkUpload(meta: UploadMeta): { ok: true; fileName: string; contentType: UploadType } | { ok: false; field: keyof UploadMeta; message: string } {
+  const contentType = meta.contentType.toLowerCase().split(";")[0].trim();
+  if (!isUploadType(contentType)) return { ok: false, field: "contentType", message: typeRefusal(contentType) };
+  const size = sizeRefusal(meta.sizeBytes);
+  if (size) return { ok: false, field: "sizeBytes", message: size };
+  const name = sanitiseFileName(meta.fileName);
+  if (!name.ok) return { ok: false, field: "fileName", message: name.message };
+  return { ok: true, fileName: name.name, contentType };
+}
