@@ -9,6 +9,7 @@ const SECTIONS: { path: string; label: string; roles: Role[] }[] = [
   { path: "/water", label: "Water & cycling", roles: ["lead", "crew", "client"] },
   { path: "/photos", label: "Photos", roles: ["lead", "crew", "client"] },
   { path: "/talk", label: "Messages & notes", roles: ["lead", "crew", "client"] },
+  { path: "/visits", label: "Visits", roles: ["lead", "crew"] },
 ];
 
 export function projectTabsFor(projectId: string, role: Role): ProjectTab[] {
