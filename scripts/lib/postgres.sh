@@ -29,7 +29,8 @@ as_pg() {
 
 # pg_data_dir NAME: the cluster's folder. Inside the project when the owner can reach it, else in /tmp.
 pg_data_dir() {
-  local name=$1 dir="$PROJECT_ROOT/.data/$name"
+  local name=$1
+  local dir="$PROJECT_ROOT/.data/pg-$name"
   mkdir -p "$PROJECT_ROOT/.data"
   if [ "$(id -u)" -eq 0 ] && ! runuser -u postgres -- test -x "$PROJECT_ROOT/.data"; then
     dir="/tmp/tankwright-$(echo "$PROJECT_ROOT" | md5sum | cut -c1-8)-$name"
