@@ -5,7 +5,8 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
-import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { inputStyles } from "@/components/ui/button-styles";
+import { SubmitRow } from "@/components/ui/submit-row";
 import { contactSchema, type ContactInput } from "@/app/api/me/contact/contact.schema";
 
 export function ContactForm({ initial, email }: { initial: ContactInput; email: string }) {
@@ -35,16 +36,7 @@ export function ContactForm({ initial, email }: { initial: ContactInput; email: 
         <input id="contact-phone" type="tel" className={inputStyles} aria-invalid={!!e.phone} {...register("phone")} />
       </Field>
       <p className="text-sm text-muted sm:col-span-2">E-mail: {email} (ask the project lead to change it).</p>
-      <div className="flex items-center gap-3 sm:col-span-2">
-        <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-          Save details
-        </button>
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      <SubmitRow busy={formState.isSubmitting} label="Save details" busyLabel="Saving…" status={status} className="sm:col-span-2" />
     </form>
   );
 }

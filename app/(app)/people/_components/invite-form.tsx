@@ -6,7 +6,8 @@ import { inviteSchema, type InviteInput } from "../invite.schema";
 import { useRouter } from "next/navigation";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
-import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { inputStyles } from "@/components/ui/button-styles";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 export function InviteForm() {
   const router = useRouter();
@@ -46,16 +47,7 @@ export function InviteForm() {
           <option value="crew">Crew: works assigned projects</option>
         </select>
       </Field>
-      <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
-        <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Adding…" : "Add and send invitation"}
-        </button>
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      <SubmitRow busy={formState.isSubmitting} label="Add and send invitation" busyLabel="Adding…" status={status} className="sm:col-span-2" />
     </form>
   );
 }

@@ -1,7 +1,8 @@
 "use client";
 import { useRef, useState } from "react";
 import { useRouter } from "next/navigation";
-import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { inputStyles } from "@/components/ui/button-styles";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 /**
  * A client's photo of a problem at home (a leak, cloudy water, a noisy pump). It is sent through
@@ -54,16 +55,7 @@ export function ProblemPhotoForm({ projectId, stage }: { projectId: string; stag
         What's wrong? (optional)
       </label>
       <input id="problem-caption" name="caption" maxLength={300} className={inputStyles} />
-      <div className="flex flex-wrap items-center gap-3">
-        <button type="submit" className={buttonStyles.secondary} disabled={busy}>
-          {busy ? "Sending…" : "Send photo"}
-        </button>
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      <SubmitRow busy={busy} label="Send photo" busyLabel="Sending…" status={status} variant="secondary" />
     </form>
   );
 }

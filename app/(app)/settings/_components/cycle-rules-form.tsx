@@ -7,7 +7,8 @@ import { cycleRulesSchema, type CycleRulesInput, type CycleRulesValues } from ".
 import type { CycleRules } from "@/lib/cycling/cycle-rules";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
-import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { inputStyles } from "@/components/ui/button-styles";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 type NumericRule = Exclude<keyof CycleRules, "requireNitrate">;
 
@@ -68,16 +69,7 @@ export function CycleRulesForm({ overrides, defaults }: { overrides: Partial<Cyc
           </select>
         </Field>
       </div>
-      <div className="flex flex-wrap items-center gap-3">
-        <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Saving…" : "Save cycle rules"}
-        </button>
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      <SubmitRow busy={formState.isSubmitting} label="Save cycle rules" busyLabel="Saving…" status={status} />
     </form>
   );
 }

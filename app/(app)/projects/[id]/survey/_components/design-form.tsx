@@ -4,7 +4,6 @@ import { useRouter } from "next/navigation";
 import { get, useForm, type FieldPath, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { sendJson } from "@/lib/http/send-json";
-import { buttonStyles } from "@/components/ui/button-styles";
 import { Caution } from "@/components/ui/caution";
 import { designFromForm, designToForm, type DesignFormValues } from "@/lib/survey/design-form";
 import { loadCheck, type StoredDesign } from "@/lib/survey/load-check";
@@ -14,6 +13,7 @@ import { ALL_CAUTIONS } from "@/lib/tank/cautions";
 import { unitLabel, type UnitSystem } from "@/lib/tank/units";
 import { FieldGroup, NumberInput, SelectInput } from "./form-bits";
 import { LoadCautions, LoadResults } from "./load-results";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 const opts = (pairs: [string, string][]) => pairs.map(([value, label]) => ({ value, label }));
 const SHAPES = opts([["rectangular", "Rectangular"], ["cylinder", "Cylinder"], ["bowfront", "Bow-front"]]);
@@ -134,16 +134,7 @@ export function DesignForm(props: { projectId: string; stored: StoredDesign | nu
           )}
           {standGroupError && <p className="text-sm font-medium text-danger sm:col-span-2">{standGroupError}</p>}
         </FieldGroup>
-        <div className="flex flex-wrap items-center gap-3">
-          <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-            {formState.isSubmitting ? "Saving…" : "Save design"}
-          </button>
-          {status && (
-            <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-              {status.text}
-            </p>
-          )}
-        </div>
+        <SubmitRow busy={formState.isSubmitting} label="Save design" busyLabel="Saving…" status={status} />
         {warnings.map((w) => (
           <Caution key={w}>{w}</Caution>
         ))}

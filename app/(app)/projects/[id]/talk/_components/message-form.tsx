@@ -5,8 +5,9 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
-import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { inputStyles } from "@/components/ui/button-styles";
 import { MESSAGE_MAX, messageSchema, type MessageInput } from "@/app/api/projects/[id]/messages/message.schema";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 /** Writes a message on the project. On failure the text stays in the box, so nothing is lost. */
 export function MessageForm({ projectId, to }: { projectId: string; to: string }) {
@@ -31,16 +32,7 @@ export function MessageForm({ projectId, to }: { projectId: string; to: string }
       <Field id="message-body" label="Message" error={formState.errors.body?.message} hint={`${length}/${MESSAGE_MAX} characters`}>
         <textarea id="message-body" rows={4} className={inputStyles} aria-invalid={!!formState.errors.body} aria-describedby={formState.errors.body ? "message-body-error" : undefined} {...register("body")} />
       </Field>
-      <div className="flex flex-wrap items-center gap-3">
-        <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Sending…" : "Send message"}
-        </button>
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      <SubmitRow busy={formState.isSubmitting} label="Send message" busyLabel="Sending…" status={status} />
     </form>
   );
 }

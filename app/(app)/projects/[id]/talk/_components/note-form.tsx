@@ -5,8 +5,9 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
-import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { inputStyles } from "@/components/ui/button-styles";
 import { noteSchema, type NoteInput } from "@/app/api/projects/[id]/notes/note.schema";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 /** The lead's note: internal unless shared, and sharing e-mails the client. */
 export function NoteForm({ projectId }: { projectId: string }) {
@@ -33,16 +34,7 @@ export function NoteForm({ projectId }: { projectId: string }) {
       <label className="flex items-center gap-2 text-sm">
         <input type="checkbox" {...register("shared")} /> Share with the client (they see it and get an e-mail)
       </label>
-      <div className="flex flex-wrap items-center gap-3">
-        <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Saving…" : "Save note"}
-        </button>
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      <SubmitRow busy={formState.isSubmitting} label="Save note" busyLabel="Saving…" status={status} />
     </form>
   );
 }

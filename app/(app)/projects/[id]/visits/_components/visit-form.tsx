@@ -5,9 +5,10 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
-import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { inputStyles } from "@/components/ui/button-styles";
 import { visitKinds } from "@/db/schema/visits";
 import { visitSchema, type VisitInput } from "@/app/api/projects/[id]/visits/visit.schema";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 /** The lead books a visit; the time is entered in the browser's own time zone. */
 export function VisitForm({ projectId }: { projectId: string }) {
@@ -50,16 +51,7 @@ export function VisitForm({ projectId }: { projectId: string }) {
       <Field id="visit-notes" label="Notes for the client and crew (optional)" error={e.notes?.message}>
         <input id="visit-notes" className={inputStyles} {...register("notes")} />
       </Field>
-      <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
-        <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Booking…" : "Book visit"}
-        </button>
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      <SubmitRow busy={formState.isSubmitting} label="Book visit" busyLabel="Booking…" status={status} className="sm:col-span-2" />
     </form>
   );
 }

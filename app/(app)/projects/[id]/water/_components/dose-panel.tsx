@@ -7,10 +7,11 @@ import { format } from "date-fns";
 import { doseSchema, type DoseInput, type DoseValues } from "../dose.schema";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
-import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
+import { inputStyles } from "@/components/ui/button-styles";
 import { DoseCalculator, type DoseSuggestion } from "./dose-calculator";
 import { VoidButton } from "./void-button";
 import { formatReading, type DoseView } from "./views";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 const fresh = (): DoseInput => ({ dosedAt: format(new Date(), "yyyy-MM-dd'T'HH:mm"), targetMgL: "2", amountMl: "", sourcePercent: "", notes: "" });
 
@@ -62,16 +63,7 @@ export function DosePanel({ projectId, doses, designVolume, unitSystem, canVoid 
             <input id="dose-notes" className={inputStyles} {...register("notes")} />
           </Field>
         </div>
-        <div className="flex flex-wrap items-center gap-3 sm:col-span-4">
-          <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-            {formState.isSubmitting ? "Saving…" : "Log dose"}
-          </button>
-          {status && (
-            <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-              {status.text}
-            </p>
-          )}
-        </div>
+        <SubmitRow busy={formState.isSubmitting} label="Log dose" busyLabel="Saving…" status={status} className="sm:col-span-4" />
       </form>
       {doses.length === 0 ? (
         <p className="text-sm text-muted">No doses logged yet.</p>
