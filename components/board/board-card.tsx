@@ -63,7 +63,7 @@ export function BoardCard({ card, now, error, saving }: { card: Card; now: Date;
             <span
               key={`${p.id}-${p.lead}`}
               title={`${p.name}${p.lead ? " (lead)" : ""}`}
-              className={`inline-flex h-6 w-6 items-center justify-center rounded-full border border-card text-[10px] font-bold ${p.lead ? "bg-accent text-white" : "bg-paper text-ink"}`}
+              className={`inline-flex h-6 w-6 items-center justify-center rounded-full border border-card text-[9px] font-bold tracking-tighter ${p.lead ? "bg-accent text-white" : "bg-paper text-ink"}`}
               aria-hidden="true"
             >
               {initials(p.name)}
