@@ -1,8 +1,7 @@
 "use client";
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useMemo, useState } from "react";
 import { useRouter } from "next/navigation";
-import { get, useForm, type FieldPath, type Resolver } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { get, type FieldPath } from "react-hook-form";
 import { sendJson } from "@/lib/http/send-json";
 import { Caution } from "@/components/ui/caution";
 import { designFromForm, designToForm, type DesignFormValues } from "@/lib/survey/design-form";
@@ -11,6 +10,7 @@ import type { SiteSurvey } from "@/lib/survey/site-survey.schema";
 import { tankDesignSchema } from "@/lib/survey/tank-design.schema";
 import { ALL_CAUTIONS } from "@/lib/tank/cautions";
 import { unitLabel, type UnitSystem } from "@/lib/tank/units";
+import { useUnitsForm } from "./use-units-form";
 import { FieldGroup, NumberInput, SelectInput } from "./form-bits";
 import { LoadCautions, LoadResults } from "./load-results";
 import { SubmitRow } from "@/components/ui/submit-row";
@@ -30,26 +30,13 @@ export function DesignForm(props: { projectId: string; stored: StoredDesign | nu
   const router = useRouter();
   const [status, setStatus] = useState<{ ok: boolean; text: string } | null>(null);
   const [warnings, setWarnings] = useState<string[]>([]);
-  const storedRef = useRef(stored);
-  storedRef.current = stored;
-  // Text in the person's units goes through the same schema as the server's (which runs validateDesign).
-  const resolver = useMemo<Resolver<DesignFormValues>>(
-    () => async (values, ctx, options) => zodResolver(tankDesignSchema)(designFromForm(values, system, storedRef.current) as never, ctx, options as never) as never,
-    [system],
-  );
-  const { register, handleSubmit, formState, setError, watch, getValues, reset } = useForm<DesignFormValues>({
-    resolver,
-    mode: "onBlur",
-    defaultValues: designToForm(stored, system),
+  const { register, handleSubmit, formState, setError, watch, getValues, reset } = useUnitsForm<DesignFormValues, StoredDesign>({
+    schema: tankDesignSchema,
+    stored,
+    system,
+    toForm: designToForm,
+    fromForm: designFromForm,
   });
-
-  const shownSystem = useRef(system);
-  useEffect(() => {
-    if (shownSystem.current === system) return;
-    const si = designFromForm(getValues(), shownSystem.current, storedRef.current);
-    reset(designToForm(si as unknown as StoredDesign, system));
-    shownSystem.current = system;
-  }, [system, getValues, reset]);
 
   const values = watch();
   const live = useMemo(() => {

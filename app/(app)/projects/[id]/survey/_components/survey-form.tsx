@@ -1,14 +1,13 @@
 "use client";
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { useForm, type Resolver } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
 import { sendJson } from "@/lib/http/send-json";
 import { buttonStyles } from "@/components/ui/button-styles";
 import { siteSurveySchema, type SiteSurvey, type SurveyField } from "@/lib/survey/site-survey.schema";
 import { SURVEY_FIELD_LABELS, requiredSurveyFields, surveyMissingFields } from "@/lib/survey/survey-missing";
 import { surveyFromForm, surveyToForm, type SurveyFormValues } from "@/lib/survey/survey-form";
 import { unitLabel, type UnitSystem } from "@/lib/tank/units";
+import { useUnitsForm } from "./use-units-form";
 import { FieldGroup, NumberInput, SelectInput, TextInput, withBlank } from "./form-bits";
 
 const opts = (pairs: [string, string][]) => pairs.map(([value, label]) => ({ value, label }));
@@ -26,27 +25,13 @@ type Status = { tone: "ok" | "caution" | "danger"; text: string } | null;
 export function SurveyForm({ projectId, stored, system }: { projectId: string; stored: Partial<SiteSurvey> | null; system: UnitSystem }) {
   const router = useRouter();
   const [status, setStatus] = useState<Status>(null);
-  const storedRef = useRef(stored);
-  storedRef.current = stored;
-  // The form holds text in the person's units; the resolver converts to SI and runs the server's schema.
-  const resolver = useMemo<Resolver<SurveyFormValues>>(
-    () => async (values, ctx, options) => zodResolver(siteSurveySchema)(surveyFromForm(values, system, storedRef.current) as never, ctx, options as never) as never,
-    [system],
-  );
-  const { register, handleSubmit, formState, setError, watch, getValues, reset } = useForm<SurveyFormValues>({
-    resolver,
-    mode: "onBlur",
-    defaultValues: surveyToForm(stored, system),
+  const { register, handleSubmit, formState, setError, watch, getValues, reset } = useUnitsForm<SurveyFormValues, Partial<SiteSurvey>>({
+    schema: siteSurveySchema,
+    stored,
+    system,
+    toForm: surveyToForm,
+    fromForm: surveyFromForm,
   });
-
-  const shownSystem = useRef(system);
-  useEffect(() => {
-    if (shownSystem.current === system) return;
-    // Keep what was typed when the units change: read it in the old units, show it in the new.
-    const si = surveyFromForm(getValues(), shownSystem.current, storedRef.current);
-    reset(surveyToForm(si as Partial<SiteSurvey>, system));
-    shownSystem.current = system;
-  }, [system, getValues, reset]);
 
   const floorType = watch("floorType");
   const values = watch();
