@@ -86,6 +86,8 @@ export async function moveProject(projectId: string, input: MoveInput, user: Pic
         version: sql`${projects.version} + 1`,
         updatedAt: now,
         ...(stageChanged ? { stageEnteredAt: now } : {}),
+        // A new cycle gets its own "ready" notice.
+        ...(stageChanged && to === "cycling" ? { cycleReadyNotifiedAt: null } : {}),
       })
       .where(eq(projects.id, projectId))
       .returning();

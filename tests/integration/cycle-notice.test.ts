@@ -48,6 +48,23 @@ describe("the cycle-ready notice", () => {
     expect(await mailTo(t.crew.email)).toHaveLength(0);
   });
 
+  it("lets a project that goes back into cycling be announced again", async () => {
+    const t = await makeTeam("cycling");
+    await db().update(projects).set({ cycleReadyNotifiedAt: new Date() }).where(eq(projects.id, t.project.id));
+    const lead = await signedIn(t.lead);
+    const back = await lead.post(`/api/projects/${t.project.id}/move`, { toStage: "fill_leak_test", version: t.project.version, reason: "Refilling after a seal repair" });
+    expect(back.status).toBe(200);
+    const again = await lead.post(`/api/projects/${t.project.id}/move`, {
+      toStage: "cycling",
+      version: back.json.version,
+      overrideReason: "Leak re-checked on site after the repair",
+    });
+    expect(again.status).toBe(200);
+    const [p] = await db().select().from(projects).where(eq(projects.id, t.project.id));
+    expect(p.stage).toBe("cycling");
+    expect(p.cycleReadyNotifiedAt).toBeNull();
+  });
+
   it("sends nothing while the gate is still shut", async () => {
     const t = await makeTeam("cycling");
     const res = await (await signedIn(t.crew)).post(`/api/projects/${t.project.id}/water-tests`, { ...zero(1), ammoniaMgL: 2 });
