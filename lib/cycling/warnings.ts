@@ -130,9 +130,10 @@ export function stallWarning(
   readings: readonly WaterTest[],
   now: Date,
   stallDays: number = DEFAULT_CYCLE_RULES.stallDays,
+  stallChangeMgL: number = DEFAULT_CYCLE_RULES.stallChangeMgL,
 ): CycleWarning | null {
   const h = prepareHistory(readings);
-  if (!isStalled(h, now.getTime(), stallDays, DEFAULT_CYCLE_RULES.stallChangeMgL)) return null;
+  if (!isStalled(h, now.getTime(), stallDays, stallChangeMgL)) return null;
   return {
     level: "caution",
     code: "stall",

@@ -86,4 +86,12 @@ describe("stallWarning", () => {
     moving[9] = reading(at(9), { ammoniaMgL: 0, nitriteMgL: 2 });
     expect(stallWarning(moving, at(11, 1))).toBeNull();
   });
+
+  it("uses the company's smallest change that counts as progress", () => {
+    const drifting = flat(11);
+    drifting[9] = reading(at(9), { ammoniaMgL: 0, nitriteMgL: 4 });
+    // A 1 mg/L drop counts as progress under the default 0.25 mg/L, but not under a 2 mg/L rule.
+    expect(stallWarning(drifting, at(11, 1))).toBeNull();
+    expect(stallWarning(drifting, at(11, 1), 10, 2)?.code).toBe("stall");
+  });
 });

@@ -27,7 +27,7 @@ export function CycleSummary({
   const fishPresent = stage === "first_stocking" || stage === "in_service";
   const latest = readings.find((r) => !r.voided);
   const warnings: CycleWarning[] = latest ? readingWarnings(latest, { fishPresent }) : [];
-  const stall = stallWarning(tests, now, evaluation.rules.stallDays);
+  const stall = stallWarning(tests, now, evaluation.rules.stallDays, evaluation.rules.stallChangeMgL);
   if (stall) warnings.push(stall);
   const { ready, phase, reasons, daysSinceStart } = evaluation;
 
