@@ -3,8 +3,8 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { sendJson } from "@/lib/http/send-json";
-import { buttonStyles } from "@/components/ui/button-styles";
 import { PREF_LABELS, prefsSchema, type PrefsInput } from "@/app/api/me/notifications/prefs.schema";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 /** One switch per kind of e-mail; invitations and password e-mails always go. */
 export function PrefsForm({ initial, kinds }: { initial: Required<PrefsInput>; kinds: (keyof PrefsInput)[] }) {
@@ -28,16 +28,7 @@ export function PrefsForm({ initial, kinds }: { initial: Required<PrefsInput>; k
           </span>
         </label>
       ))}
-      <div className="flex items-center gap-3">
-        <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-          Save notifications
-        </button>
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      <SubmitRow busy={formState.isSubmitting} label="Save notifications" busyLabel="Saving…" status={status} />
     </form>
   );
 }

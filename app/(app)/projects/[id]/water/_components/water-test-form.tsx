@@ -12,6 +12,7 @@ import { Field } from "@/components/ui/field";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
 import { KitPicks } from "./kit-picks";
 import type { ReadingView } from "./views";
+import { SubmitRow } from "@/components/ui/submit-row";
 
 type FormInput = WaterTestInput & { reason?: string };
 const localNow = () => format(new Date(), "yyyy-MM-dd'T'HH:mm");
@@ -111,21 +112,19 @@ export function WaterTestForm({ projectId, unitSystem, correcting, onDone }: { p
           </Field>
         </div>
       )}
-      <div className="flex flex-wrap items-center gap-3 sm:col-span-3">
-        <button type="submit" className={buttonStyles.primary} disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Saving…" : correcting ? "Save correction" : "Save water test"}
-        </button>
+      <SubmitRow
+        busy={formState.isSubmitting}
+        label={correcting ? "Save correction" : "Save water test"}
+        busyLabel="Saving…"
+        status={status}
+        className="sm:col-span-3"
+      >
         {onDone && (
           <button type="button" className={buttonStyles.secondary} onClick={onDone}>
             Cancel
           </button>
         )}
-        {status && (
-          <p role="status" className={`text-sm ${status.ok ? "text-ok" : "text-danger"}`}>
-            {status.text}
-          </p>
-        )}
-      </div>
+      </SubmitRow>
     </form>
   );
 }
