@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, sql } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { db } from "../index";
 import { projectCrew, projects } from "../schema";
 import { canOnProject, canSeeProject, type ProjectAction, type Relation } from "../../lib/auth/permissions";
@@ -43,13 +43,4 @@ export async function requireProject(opts: { projectId: string; user: Pick<Sessi
   if (!found || !canSeeProject(found.relation)) throw notFound();
   if (!canOnProject(found.relation, opts.action)) throw forbidden();
   return found;
-}
-
-export async function isAssigned(projectId: string, userId: string): Promise<boolean> {
-  const [row] = await db()
-    .select({ one: sql`1` })
-    .from(projectCrew)
-    .where(and(eq(projectCrew.projectId, projectId), eq(projectCrew.userId, userId)))
-    .limit(1);
-  return !!row;
 }

@@ -1,7 +1,7 @@
 import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
-import { and, asc, desc, eq, gt, isNull, sql } from "drizzle-orm";
+import { and, asc, eq, gt, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "../index";
 import { invitations, notices, users } from "../schema";
 import { companyName, enqueueNotice } from "./outbox";
@@ -30,11 +30,6 @@ export async function verifyCredentials(email: string, password: string) {
     .limit(1);
   const ok = await bcrypt.compare(password, user?.passwordHash ?? getDummyHash());
   return ok && user?.passwordHash ? user : null;
-}
-
-export async function getUserById(id: string) {
-  const [user] = await db().select().from(users).where(eq(users.id, id)).limit(1);
-  return user ?? null;
 }
 
 /** Everyone the lead manages, with their latest invitation and whether its e-mail went out. */
@@ -142,10 +137,3 @@ export async function acceptInvitation(token: string, password: string) {
   });
 }
 
-export async function listUsersByRole(role: Role) {
-  return db().select({ id: users.id, name: users.name, email: users.email }).from(users).where(eq(users.role, role)).orderBy(asc(users.name));
-}
-
-export async function recentInvitationNotices() {
-  return db().select().from(notices).where(eq(notices.kind, "invitation")).orderBy(desc(notices.createdAt)).limit(50);
-}

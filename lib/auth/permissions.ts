@@ -23,7 +23,7 @@ export type ProjectAction =
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
-const LEAD_ONLY: ProjectAction[] = ["override_gate", "approve_load", "untick_checklist", "void_water_test", "write_note", "edit_details"];
+// Everything not listed for crew or clients is the lead's alone.
 const CREW: ProjectAction[] = ["view", "move", "edit_survey", "tick_checklist", "log_water_test", "log_dose", "record_stocking", "upload_photo", "send_message"];
 const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message"];
 
@@ -40,5 +40,3 @@ export function canOnProject(rel: Relation, action: ProjectAction): boolean {
   if (rel.role === "crew") return CREW.includes(action);
   return CLIENT.includes(action);
 }
-
-export { LEAD_ONLY };
