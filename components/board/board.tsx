@@ -1,8 +1,7 @@
 "use client";
 import { useCallback, useEffect, useId, useMemo, useRef, useState } from "react";
 import useSWR from "swr";
-import { DndContext, DragOverlay, KeyboardSensor, MouseSensor, TouchSensor, closestCorners, useSensor, useSensors, type DragEndEvent, type DragStartEvent } from "@dnd-kit/core";
-import { sortableKeyboardCoordinates } from "@dnd-kit/sortable";
+import { DndContext, DragOverlay, KeyboardSensor, MouseSensor, TouchSensor, useSensor, useSensors, type DragEndEvent, type DragStartEvent } from "@dnd-kit/core";
 import type { BoardCard as Card, BoardData } from "@/db/queries/board";
 import type { Role } from "@/lib/auth/roles";
 import { STAGES, STAGE_LABELS, stageIndex, type Stage } from "@/lib/stages/stages";
@@ -17,6 +16,7 @@ import { MoveReasonDialog, type ReasonRequest } from "./move-reason-dialog";
 import { MoveToDialog } from "./move-to-dialog";
 import { SkipDialog } from "./skip-dialog";
 import { StageSwitcher } from "./stage-switcher";
+import { boardCollisions, boardKeyboardCoordinates } from "./collisions";
 import { planOnCard, planToEnd, stageOfTarget, type PlannedMove } from "./plan-move";
 type MoveAnswer = { stage: Stage; position: string; version: number; stageEnteredAt: string };
 
@@ -68,7 +68,7 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
   const sensors = useSensors(
     useSensor(MouseSensor, { activationConstraint: { distance: 5 } }),
     useSensor(TouchSensor, { activationConstraint: { delay: 250, tolerance: 8 }, bypassActivationConstraint: onHandle }),
-    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
+    useSensor(KeyboardSensor, { coordinateGetter: boardKeyboardCoordinates }),
   );
 
   const announcements = useMemo(() => {
@@ -161,7 +161,7 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
       <DndContext
         id={dndId}
         sensors={sensors}
-        collisionDetection={closestCorners}
+        collisionDetection={boardCollisions}
         accessibility={{ announcements, screenReaderInstructions: { draggable: "To move a card, press Space. Use the arrow keys to choose a column and place, Space to drop it there, or Escape to put it back." } }}
         autoScroll={AUTO_SCROLL}
         onDragStart={onDragStart}
