@@ -13,7 +13,7 @@ export const GET = route<Params>(async (_req, { params }) => {
   const { id } = await params;
   const user = await requireUser();
   const { project } = await requireProject({ projectId: id, user, action: "view" });
-  if (user.role === "client") throw forbidden("The board is for the install team; your projects are under My projects.");
+  if (user.role === "client") throw forbidden("The board is for the install team; your tanks are under Your tanks.");
   return NextResponse.json(await getProjectDetail(project.id));
 });
 
