@@ -87,6 +87,11 @@ CHILD_PIDS+=($!)
 CHILD_PIDS+=($!)
 wait_http "http://127.0.0.1:$PORT/api/health" 60
 
+# Screens first, while the database holds only the demo.
+if [ "$want_screens" = 1 ]; then
+  echo "== screens"
+  node node_modules/@playwright/test/cli.js test -c playwright.screens.config.ts
+fi
 if [ "$want_int" = 1 ]; then
   echo "== integration"
   node node_modules/vitest/vitest.mjs run --project integration "${int_files[@]}"
@@ -94,9 +99,5 @@ fi
 if [ "$want_e2e" = 1 ]; then
   echo "== browser"
   node node_modules/@playwright/test/cli.js test "${e2e_files[@]}"
-fi
-if [ "$want_screens" = 1 ]; then
-  echo "== screens"
-  node node_modules/@playwright/test/cli.js test -c playwright.screens.config.ts
 fi
 echo "All tests passed."

@@ -20,7 +20,7 @@ const localNow = () => format(new Date(), "yyyy-MM-dd'T'HH:mm");
 const text = (v: number | null | undefined) => (v == null ? "" : String(Number(v.toFixed(3))));
 
 const ANALYTES = [
-  { name: "ammoniaMgL", analyte: "ammonia", label: "Ammonia", hint: "Total ammonia (NH3 + NH4+)." },
+  { name: "ammoniaMgL", analyte: "ammonia", label: "Ammonia", hint: undefined },
   { name: "nitriteMgL", analyte: "nitrite", label: "Nitrite", hint: undefined },
   { name: "nitrateMgL", analyte: "nitrate", label: "Nitrate", hint: undefined },
 ] as const;
