@@ -43,7 +43,7 @@ describe("company test kits", () => {
     }
     const wrongAnalyte = await lead.request("POST", "/api/settings/test-kits", kit({ analyte: "phosphate" }));
     expect(wrongAnalyte.status).toBe(400);
-    expect((await lead.request("POST", "/api/settings/test-kits", "not json")).status).toBe(400);
+    expect((await lead.request("POST", "/api/settings/test-kits", "not json", { headers: { "content-type": "application/json" } })).status).toBe(400);
     expect((await db().select().from(testKits)).length).toBe(before);
   });
 

@@ -8,7 +8,7 @@ import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
 import { SubmitRow, type FormStatus } from "@/components/ui/submit-row";
-import type { TestKitInput } from "../test-kit.schema";
+import type { TestKitInput } from "@/app/api/settings/test-kits/test-kit.schema";
 
 const steps = (s: readonly number[]) => s.join(", ");
 

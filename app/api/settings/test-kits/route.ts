@@ -1,21 +1,15 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { userRoute } from "@/server/route";
 import { badRequest, type FieldErrors } from "@/server/errors";
 import { addTestKit, listTestKits } from "@/db/queries/test-kits";
 import { validateKit } from "@/lib/cycling/test-kits";
-import { testKitSchema } from "@/app/(app)/settings/test-kit.schema";
+import { testKitSchema } from "./test-kit.schema";
 
 /** The company's kits, retired ones included. Lead only. */
-export const GET = route(async () => {
-  await requireUser("lead");
-  return NextResponse.json({ kits: await listTestKits({ includeRetired: true }) });
-});
+export const GET = userRoute({ roles: ["lead"] }, async () => NextResponse.json({ kits: await listTestKits({ includeRetired: true }) }));
 
 /** Adds a kit the company uses. Lead only. */
-export const POST = route(async (req) => {
-  const input = await parseJson(req, testKitSchema);
-  const user = await requireUser("lead");
+export const POST = userRoute({ roles: ["lead"], schema: testKitSchema }, async ({ input, user }) => {
   const problems = validateKit(input);
   if (problems.length) {
     const fields: FieldErrors = {};

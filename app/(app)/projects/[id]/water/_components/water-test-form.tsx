@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useForm, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { format } from "date-fns";
-import { correctWaterTestSchema, waterTestSchema, type WaterTestInput, type WaterTestValues } from "../water-test.schema";
+import { correctWaterTestSchema, waterTestSchema, type WaterTestInput, type WaterTestValues } from "@/app/api/projects/[id]/water-tests/water-test.schema";
 import type { Analyte } from "@/lib/cycling/readings";
 import { NEUTRAL_TEST_KITS, type TestKit } from "@/lib/cycling/test-kits";
 import { celsiusToFahrenheit } from "@/lib/tank/units";

@@ -1,11 +1,8 @@
 import { NextResponse } from "next/server";
-import { route, parseId } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { userRoute, parseId } from "@/server/route";
 import { retireTestKit } from "@/db/queries/test-kits";
 
 /** Retires a kit the company no longer uses; it is kept for the record. Lead only. */
-export const POST = route<{ id: string }>(async (_req, ctx) => {
-  const id = parseId((await ctx.params).id, "That kit");
-  await requireUser("lead");
-  return NextResponse.json({ kit: await retireTestKit(id) });
-});
+export const POST = userRoute<undefined, undefined, { id: string }>({ roles: ["lead"] }, async ({ params }) =>
+  NextResponse.json({ kit: await retireTestKit(parseId(params.id, "That kit")) }),
+);
