@@ -18,7 +18,7 @@ export function KitPicks({ label, kit, current, onPick }: { label: string; kit: 
               key={step}
               type="button"
               aria-pressed={now === stored}
-              aria-label={step === 0 ? `${label} below detection (0)` : `${label} ${step} ${unit}`}
+              aria-label={step === 0 ? `${label} below detection (0 mg/L)` : `${label} ${step} ${unit}`}
               onClick={() => onPick(String(stored))}
               className={`rounded-md border px-2 py-0.5 text-xs num ${now === stored ? "border-accent bg-accent-soft text-accent-strong" : "border-line bg-paper text-ink hover:border-accent"}`}
             >
