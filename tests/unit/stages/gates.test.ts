@@ -8,6 +8,7 @@ const none: GateFacts = {
   leak: { filled: false, after24hPassed: null },
   cycle: null,
   stockingBatches: 0,
+  deposit: "not_invoiced",
 };
 const all: GateFacts = {
   survey: { complete: true },
@@ -16,6 +17,7 @@ const all: GateFacts = {
   leak: { filled: true, after24hPassed: true },
   cycle: { ready: true, reasons: [] },
   stockingBatches: 1,
+  deposit: "paid",
 };
 
 describe("checkGate", () => {
