@@ -19,13 +19,21 @@ export type ProjectAction =
   | "upload_photo"
   | "write_note"
   | "send_message"
-  | "edit_details";
+  | "edit_details"
+  /** Read the project's quote and invoices (the client: the current quote and their own invoices). */
+  | "see_money"
+  /** Price, issue quotes, set the schedule, record transfers. */
+  | "manage_money"
+  /** Accept the quote and pay invoices: the project's own client. */
+  | "accept_and_pay";
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
 // Everything not listed for crew or clients is the lead's alone.
 const CREW: ProjectAction[] = ["view", "move", "edit_survey", "tick_checklist", "log_water_test", "log_dose", "record_stocking", "upload_photo", "send_message"];
-const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message"];
+const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message", "see_money", "accept_and_pay"];
+// The client's signature and card are theirs: nobody accepts or pays in their place.
+const CLIENT_ONLY: ProjectAction[] = ["accept_and_pay"];
 
 /** True when the caller can see the project at all (else it answers 404, not 403). */
 export function canSeeProject(rel: Relation): boolean {
@@ -36,6 +44,7 @@ export function canSeeProject(rel: Relation): boolean {
 
 export function canOnProject(rel: Relation, action: ProjectAction): boolean {
   if (!canSeeProject(rel)) return false;
+  if (CLIENT_ONLY.includes(action)) return rel.role === "client" && rel.owner;
   if (rel.role === "lead") return true;
   if (rel.role === "crew") return CREW.includes(action);
   return CLIENT.includes(action);
