@@ -228,3 +228,12 @@ export async function acceptQuote(opts: {
     return { acceptance, depositInvoiceId: deposit?.id ?? null };
   });
 }
+
+/** One version with its view, for the printable quote; null when there is no such quote. */
+export async function getQuoteForPrint(quoteId: string) {
+  const [q] = await db().select().from(quotes).where(eq(quotes.id, quoteId));
+  if (!q) return null;
+  const lines = await db().select().from(quoteLines).where(eq(quoteLines.quoteId, q.id)).orderBy(asc(quoteLines.position));
+  const [acceptance] = await db().select().from(quoteAcceptances).where(eq(quoteAcceptances.quoteId, q.id));
+  return { quote: q, acceptance: acceptance ?? null, ...(await quoteView(q, lines)) };
+}
