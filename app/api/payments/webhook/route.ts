@@ -16,7 +16,8 @@ export const POST = route(async (req) => {
   let event: Stripe.Event;
   try {
     event = verifyWebhook(raw, signature);
-  } catch {
+  } catch (error) {
+    if (error instanceof SyntaxError) throw badRequest("The webhook's body isn't an event; nothing was changed.");
     throw badRequest("The webhook's signature doesn't verify; nothing was changed.");
   }
   const result = await processPaymentEvent(event);
