@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { PRICE_BASES, QUOTE_GROUPS } from "@/lib/money/quote-lines";
 import { MAX_UNIT_PRICE_MINOR } from "@/lib/money/amounts";
+import { text } from "@/lib/validation/text";
 
 export const unitPriceMinor = z
   .number({ message: "Enter a price." })
@@ -12,8 +13,8 @@ export const rateBp = (what: string) =>
 
 export const priceItemSchema = z.object({
   group: z.enum(QUOTE_GROUPS, { message: "Choose a group." }),
-  label: z.string().trim().min(2, "Name the item.").max(200, "Keep the name under 200 characters."),
-  unit: z.string().trim().min(1, "Give the unit (each, m², kg, hour…).").max(20, "Keep the unit short."),
+  label: text(200, "Keep the name under 200 characters.", "Name the item.").min(2, "Name the item."),
+  unit: text(20, "Keep the unit short.", "Give the unit (each, m², kg, hour…).").min(1, "Give the unit (each, m², kg, hour…)."),
   unitPriceMinor,
   taxBp: rateBp("tax rate"),
   basis: z.enum(PRICE_BASES, { message: "Choose where the quantity comes from." }),

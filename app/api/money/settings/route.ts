@@ -1,16 +1,12 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { userRoute } from "@/server/route";
 import { getMoneySettings, saveMoneySettings } from "@/db/queries/money-settings";
 import { moneySettingsSchema } from "./money-settings.schema";
 
-export const GET = route(async () => {
-  await requireUser("lead");
+export const GET = userRoute({ roles: ["lead"] }, async () => {
   return NextResponse.json({ settings: await getMoneySettings() });
 });
 
-export const PUT = route(async (req) => {
-  const input = await parseJson(req, moneySettingsSchema);
-  await requireUser("lead");
+export const PUT = userRoute({ roles: ["lead"], schema: moneySettingsSchema }, async ({ input }) => {
   return NextResponse.json({ settings: await saveMoneySettings(input) });
 });

@@ -1,15 +1,15 @@
 import { NextResponse } from "next/server";
 import type Stripe from "stripe";
-import { route } from "@/server/route";
+import { publicRoute } from "@/server/route";
 import { badRequest } from "@/server/errors";
 import { verifyWebhook } from "@/server/payments";
 import { processPaymentEvent } from "@/db/queries/payments";
 
 /**
- * The payment service's webhook: the only thing that marks a card payment paid. The signature is
- * checked with the SDK over the raw body; a bad one is a 400 and changes nothing.
+ * The payment service's webhook: the only thing that marks a card payment paid. Its signature is
+ * the credential, checked with the SDK over the raw body; a bad one is a 400 and changes nothing.
  */
-export const POST = route(async (req) => {
+export const POST = publicRoute({}, async ({ req }) => {
   const signature = req.headers.get("stripe-signature");
   if (!signature) throw badRequest("The webhook's signature header is missing; nothing was changed.");
   const raw = await req.text();

@@ -4,6 +4,7 @@ import { requirePageUser } from "@/server/session";
 import { requirePageProject } from "@/server/page-project";
 import { getQuoteForPrint } from "@/db/queries/quotes";
 import { QuoteTable, ROUNDING_NOTE } from "@/components/money/quote-table";
+import { canOnProject } from "@/lib/auth/permissions";
 import { PrintButton } from "@/components/money/print-button";
 
 export const metadata: Metadata = { title: "Quote" };
@@ -18,8 +19,8 @@ export default async function PrintQuotePage({ params }: { params: Promise<{ quo
   if (!UUID.test(quoteId)) notFound();
   const found = await getQuoteForPrint(quoteId);
   if (!found) notFound();
-  const { project } = await requirePageProject(found.quote.projectId, user, "see_money");
-  if (user.role !== "lead" && found.quote.status === "draft") notFound();
+  const { project, relation } = await requirePageProject(found.quote.projectId, user, "see_money");
+  if (!canOnProject(relation, "manage_money") && found.quote.status === "draft") notFound();
   const { view, quote, acceptance } = found;
   return (
     <article className="print-sheet mx-auto flex max-w-3xl flex-col gap-4 rounded-2xl border border-line bg-card p-8">

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
 import { requirePageProject } from "@/server/page-project";
+import { canOnProject } from "@/lib/auth/permissions";
 import { LeadMoney } from "./_components/lead-money";
 import { ClientMoney } from "./_components/client-money";
 
@@ -12,7 +13,7 @@ export default async function ProjectMoneyPage({ params, searchParams }: { param
   const { id } = await params;
   const { payment } = await searchParams;
   const user = await requirePageUser("lead", "client");
-  const { project } = await requirePageProject(id, user, "see_money");
+  const { project, relation } = await requirePageProject(id, user, "see_money");
   const today = new Date().toISOString().slice(0, 10);
-  return user.role === "lead" ? <LeadMoney projectId={project.id} today={today} /> : <ClientMoney projectId={project.id} user={user} today={today} payment={payment ?? null} />;
+  return canOnProject(relation, "manage_money") ? <LeadMoney projectId={project.id} today={today} /> : <ClientMoney projectId={project.id} user={user} today={today} payment={payment ?? null} />;
 }

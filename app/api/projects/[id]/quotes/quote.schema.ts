@@ -2,11 +2,12 @@ import { z } from "zod";
 import { QUOTE_GROUPS } from "@/lib/money/quote-lines";
 import { MAX_QUANTITY_MILLI } from "@/lib/money/amounts";
 import { rateBp, unitPriceMinor } from "@/app/api/price-list/price-item.schema";
+import { text } from "@/lib/validation/text";
 
 export const quoteLineSchema = z.object({
   group: z.enum(QUOTE_GROUPS, { message: "Choose a group." }),
-  description: z.string().trim().min(1, "Describe the line.").max(300, "Keep a line under 300 characters."),
-  unit: z.string().trim().min(1, "Give the unit.").max(20, "Keep the unit short."),
+  description: text(300, "Keep a line under 300 characters.", "Describe the line.").min(1, "Describe the line."),
+  unit: text(20, "Keep the unit short.", "Give the unit.").min(1, "Give the unit."),
   quantityMilli: z
     .number({ message: "Enter a quantity." })
     .int("Quantities are in thousandths.")
@@ -20,7 +21,7 @@ export const quoteLineSchema = z.object({
 
 export const saveQuoteSchema = z.object({
   lines: z.array(quoteLineSchema).max(200, "A quote can have up to 200 lines."),
-  notes: z.string().max(4000, "Keep the notes under 4000 characters.").default(""),
+  notes: text(4000, "Keep the notes under 4,000 characters.").default(""),
 });
 
 export const newQuoteSchema = z.object({
@@ -28,7 +29,7 @@ export const newQuoteSchema = z.object({
 });
 
 export const acceptQuoteSchema = z.object({
-  typedName: z.string().trim().min(2, "Type your full name to accept.").max(200),
+  typedName: text(200, "That is longer than a name.", "Type your full name to accept.").min(2, "Type your full name to accept."),
   seenHash: z.string().regex(/^[0-9a-f]{64}$/, "Reload the quote and try again."),
 });
 

@@ -1,28 +1,19 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { projectRoute } from "@/server/route";
 import { createDraftQuote, getCurrentQuote, listQuotes } from "@/db/queries/quotes";
+import { canOnProject } from "@/lib/auth/permissions";
 import { newQuoteSchema } from "./quote.schema";
 
-type Params = { id: string };
-
-/** The lead gets every version; the client only the current one, with the hash of what they see. */
-export const GET = route<Params>(async (_req, ctx) => {
-  const { id } = await ctx.params;
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "see_money" });
+/** Everyone who may see money gets the current version and its hash; whoever manages money also gets every version. */
+export const GET = projectRoute({ action: "see_money" }, async ({ project, relation }) => {
   const current = await getCurrentQuote(project.id);
-  if (user.role !== "lead") return NextResponse.json({ current: current && { view: current.view, hash: current.hash, acceptance: current.acceptance } });
-  return NextResponse.json({ versions: await listQuotes(project.id), current: current && { view: current.view, hash: current.hash, acceptance: current.acceptance } });
+  const shown = current && { view: current.view, hash: current.hash, acceptance: current.acceptance };
+  if (!canOnProject(relation, "manage_money")) return NextResponse.json({ current: shown });
+  return NextResponse.json({ versions: await listQuotes(project.id), current: shown });
 });
 
 /** Starts the next version as a draft, from the design and price list or from the current version. */
-export const POST = route<Params>(async (req, ctx) => {
-  const { id } = await ctx.params;
-  const input = await parseJson(req, newQuoteSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "manage_money" });
+export const POST = projectRoute({ action: "manage_money", schema: newQuoteSchema }, async ({ input, project, user }) => {
   const quote = await createDraftQuote({ projectId: project.id, userId: user.id, from: input.from });
   return NextResponse.json({ quote }, { status: 201 });
 });

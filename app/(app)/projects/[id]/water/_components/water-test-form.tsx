@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useForm, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { format } from "date-fns";
-import { correctWaterTestSchema, waterTestSchema, type WaterTestInput, type WaterTestValues } from "../water-test.schema";
+import { correctWaterTestSchema, waterTestSchema, type WaterTestInput, type WaterTestValues } from "@/app/api/projects/[id]/water-tests/water-test.schema";
 import { kitSteps } from "@/lib/cycling/readings";
 import { celsiusToFahrenheit } from "@/lib/tank/units";
 import { sendJson } from "@/lib/http/send-json";

@@ -1,7 +1,5 @@
 import { NextResponse } from "next/server";
-import { route, parseJson, parseId } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { parseId, projectRoute } from "@/server/route";
 import { acceptQuote } from "@/db/queries/quotes";
 import { acceptQuoteSchema } from "../../quote.schema";
 
@@ -15,14 +13,10 @@ function clientAddress(req: Request): string | null {
 }
 
 /** The client accepts the current quote by typing their name; the deposit invoice follows. */
-export const POST = route<Params>(async (req, ctx) => {
-  const { id, quoteId } = await ctx.params;
-  const input = await parseJson(req, acceptQuoteSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "accept_and_pay" });
+export const POST = projectRoute<typeof acceptQuoteSchema, undefined, Params>({ action: "accept_and_pay", schema: acceptQuoteSchema }, async ({ req, input, project, user, params }) => {
   const result = await acceptQuote({
     projectId: project.id,
-    quoteId: parseId(quoteId, "That quote"),
+    quoteId: parseId(params.quoteId, "That quote"),
     user,
     typedName: input.typedName,
     seenHash: input.seenHash,
