@@ -1,5 +1,8 @@
-import { beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import fc from "fast-check";
+import { and, eq, gt, isNull } from "drizzle-orm";
+import { db } from "@/db";
+import { checklistItems, company } from "@/db/schema";
 import { makeTeam } from "../support/fixtures";
 import { anonymous, signedIn, type Session } from "../support/http";
 import { dbDigest } from "../support/db-digest";
@@ -24,13 +27,24 @@ describe("hostile and odd input to every mutating handler", () => {
   let handlers: Handler[];
   let projectId: string;
   let lead: Session;
+  let started: Date;
+  let companyRules: Record<string, unknown>;
 
   beforeAll(async () => {
+    started = new Date();
+    [{ rules: companyRules }] = await db().select({ rules: company.cycleRules }).from(company).where(eq(company.id, 1));
     handlers = (await listHandlers()).filter((h) => h.mutating && h.access.schema && SAMPLE_BODIES[keyOf(h)]);
     const t = await makeTeam("cycling");
     projectId = t.project.id;
     lead = await signedIn(t.lead);
   }, 120_000);
+
+  // Some odd values are valid, so a few writes go through; the company-wide ones are put back so
+  // the other tests find the settings and checklist they expect.
+  afterAll(async () => {
+    await db().update(company).set({ cycleRules: companyRules }).where(eq(company.id, 1));
+    await db().update(checklistItems).set({ retiredAt: new Date() }).where(and(gt(checklistItems.createdAt, started), isNull(checklistItems.retiredAt)));
+  });
 
   it("never answers 5xx, and a refused request changes nothing", async () => {
     expect(handlers.length).toBeGreaterThan(25);
