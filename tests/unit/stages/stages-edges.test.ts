@@ -12,6 +12,7 @@ const none: GateFacts = {
   leak: { filled: false, after24hPassed: null },
   cycle: null,
   stockingBatches: 0,
+  deposit: "not_required",
 };
 
 describe("gates: every reason in full", () => {
