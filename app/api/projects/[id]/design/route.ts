@@ -5,6 +5,7 @@ import { requireProject } from "@/db/queries/project-access";
 import { getDesign, getSurvey, saveDesign } from "@/db/queries/survey-design";
 import { tankDesignSchema } from "@/lib/survey/tank-design.schema";
 import { loadCheck, type StoredDesign } from "@/lib/survey/load-check";
+import { getCompanyFloorCode } from "@/db/queries/company-settings";
 
 type Params = { id: string };
 
@@ -12,11 +13,11 @@ export const GET = route<Params>(async (_req, ctx) => {
   const { id } = await ctx.params;
   const user = await requireUser();
   const { project } = await requireProject({ projectId: id, user, action: "edit_survey" });
-  const [design, survey] = await Promise.all([getDesign(project.id), getSurvey(project.id)]);
+  const [design, survey, code] = await Promise.all([getDesign(project.id), getSurvey(project.id), getCompanyFloorCode()]);
   return NextResponse.json({
     design: design?.data ?? null,
     updatedAt: design?.updatedAt ?? null,
-    results: design ? loadCheck(design.data, survey?.data) : null,
+    results: design ? loadCheck(design.data, survey?.data, code) : null,
   });
 });
 
@@ -32,7 +33,7 @@ export const PUT = route<Params>(async (req, ctx) => {
   const { project } = await requireProject({ projectId: id, user, action: "edit_survey" });
   const design = input as StoredDesign;
   const saved = await saveDesign({ projectId: project.id, data: design, userId: user.id });
-  const survey = await getSurvey(project.id);
-  const results = loadCheck(saved.data, survey?.data);
+  const [survey, code] = await Promise.all([getSurvey(project.id), getCompanyFloorCode()]);
+  const results = loadCheck(saved.data, survey?.data, code);
   return NextResponse.json({ design: saved.data, updatedAt: saved.updatedAt, results, warnings: results.siteWarnings });
 });
