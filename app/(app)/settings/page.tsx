@@ -3,13 +3,15 @@ import { requirePageUser } from "@/server/session";
 import { getCompanyCycleRules } from "@/db/queries/cycle-state";
 import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
 import { CycleRulesForm } from "./_components/cycle-rules-form";
+import { FloorCodeForm } from "./_components/floor-code-form";
+import { getCompanyFloorCode } from "@/db/queries/company-settings";
 
 export const metadata: Metadata = { title: "Settings" };
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const overrides = await getCompanyCycleRules();
+  const [overrides, floorCode] = await Promise.all([getCompanyCycleRules(), getCompanyFloorCode()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -17,6 +19,7 @@ export default async function SettingsPage() {
         <p className="text-sm text-muted">Company-wide rules. Changes apply to every project from the moment they are saved.</p>
       </div>
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
+      <FloorCodeForm current={floorCode} />
     </div>
   );
 }
