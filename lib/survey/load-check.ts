@@ -72,8 +72,9 @@ export function loadCheck(design: StoredDesign, survey?: Partial<SiteSurvey> | n
       ? checkAccess({ itemLengthMm: design.stand.lengthMm, itemWidthMm: design.stand.widthMm, itemHeightMm: standHeight, ...door })
       : null;
     access = { ...door, tank, stand };
-    if (!tank.fits) siteWarnings.push(`The tank won't get through the narrowest door as one piece. ${tank.message}`);
-    if (stand && !stand.fits) siteWarnings.push(`The stand won't get through the narrowest door assembled: build it in the room. ${stand.message}`);
+    // The door check beside the results gives the figures in the reader's units.
+    if (!tank.fits) siteWarnings.push("The tank won't get through the narrowest door as one piece: see the door check.");
+    if (stand && !stand.fits) siteWarnings.push("The stand won't get through the narrowest door assembled: build it in the room.");
   }
   if (s.roomLengthMm && s.roomWidthMm) {
     const [tankLong, tankShort] = [Math.max(design.stand.lengthMm, extent.lengthMm), Math.max(design.stand.widthMm, extent.widthMm)].sort((a, b) => b - a);

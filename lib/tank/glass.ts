@@ -9,8 +9,6 @@ import { bottomThicknessMm, internalHeightMm } from "./geometry";
 import { minimumCylinderWallThickness } from "./glass-cylinder";
 import { GLASS_CAUTIONS } from "./cautions";
 import {
-  DEFAULT_GLASS_SAFETY_FACTOR,
-  FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA,
   allowableStressMPa,
   nextStandardGlassThicknessMm,
   panelThicknessMessage,
@@ -279,7 +277,7 @@ const CASE_WORDS: Record<PlateCoefficient["plateCase"], string> = {
 };
 
 function plateSource(r: PanelThicknessResult): string {
-  return `Roark's Formulas for Stress and Strain, 7th ed., Table 11.4 case ${r.plateCase} (${CASE_WORDS[r.plateCase]}), β = ${r.beta.toFixed(3)}; modulus of rupture ${FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA} MPa / safety factor ${DEFAULT_GLASS_SAFETY_FACTOR} for glass`;
+  return `Roark's Formulas for Stress and Strain, 7th ed., Table 11.4 case ${r.plateCase} (${CASE_WORDS[r.plateCase]}), β = ${r.beta.toFixed(3)}${r.beyondTable ? ", past the table" : ""}`;
 }
 
 /**

@@ -1,10 +1,14 @@
 import type { ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
 import type { LoadCheckResults } from "@/lib/survey/load-check";
-import { formatArea, formatBoth, formatDensity, formatPressure, formatQuantity, formatThickness } from "@/lib/survey/format";
+import { formatArea, formatBoth, formatDensity, formatNumber, formatPressure, formatQuantity, formatThickness } from "@/lib/survey/format";
 import { DEFAULT_GLASS_SAFETY_FACTOR, ACRYLIC_DESIGN_STRESS_MPA, FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA } from "@/lib/tank/glass-strength";
 import type { UnitSystem } from "@/lib/tank/units";
 import { FloorScreening } from "./floor-screening";
+import { accessMessage } from "@/lib/tank/access";
+
+/** 1 psi = 6.894757 kPa (NIST Handbook 44, Appendix C: 1 lbf/in² = 4.4482216152605 N / 0.00064516 m²). */
+const MPA_PER_PSI = 0.0068947572931683613;
 
 const TOP_EDGE_WORDS = { free: "open top (top edge free)", braced: "top frame or brace (top edge held)" } as const;
 
@@ -33,6 +37,13 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
   const { results, system, showCautions = true, twoColumns = false } = props;
   const { load, floor, glass, access } = results;
   const mass = (kg: number) => formatQuantity("mass", kg, system);
+  // Clearances never overstate a fit: spare room rounds down, a shortfall up (whole mm, or 0.1 in).
+  const gap = (mm: number, round: "down" | "up") => {
+    const step = system === "metric" ? 1 : 2.54;
+    const v = (round === "down" ? Math.floor(mm / step + 1e-6) : Math.ceil(mm / step - 1e-6)) * step;
+    return formatQuantity("length", v, system);
+  };
+  const stress = (mpa: number) => (system === "metric" ? `${mpa} MPa` : `${formatNumber(mpa / MPA_PER_PSI, 0)} psi`);
   return (
     <div className={twoColumns ? "gap-8 text-sm md:columns-2 print:columns-2 [&>*]:mb-5" : "flex flex-col gap-5 text-sm"} data-testid="load-results">
       <Block title="Water">
@@ -79,10 +90,10 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
           <dl>
             <Row label={`Door ${formatQuantity("length", access.doorWidthMm, system)} × ${formatQuantity("length", access.doorHeightMm, system)}`}>{""}</Row>
             <Row label="Tank" testId="access-tank">
-              <span className={access.tank.fits ? "" : "text-danger"}>{access.tank.message}</span>
+              <span className={access.tank.fits ? "" : "text-danger"}>{accessMessage(access.tank, gap)}</span>
             </Row>
             <Row label="Stand">
-              {access.stand ? <span className={access.stand.fits ? "" : "text-danger"}>{access.stand.message}</span> : <span className="text-muted">Enter the stand height to check it.</span>}
+              {access.stand ? <span className={access.stand.fits ? "" : "text-danger"}>{accessMessage(access.stand, gap)}</span> : <span className="text-muted">Enter the stand height to check it.</span>}
             </Row>
           </dl>
         ) : (
@@ -125,8 +136,8 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
           ))}
         </ul>
         <p className="text-xs text-muted" data-testid="glass-sources">
-          Walls checked full to the rim. Glass: modulus of rupture {FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA} MPa with a safety factor of {DEFAULT_GLASS_SAFETY_FACTOR} (common
-          practice); acrylic: {ACRYLIC_DESIGN_STRESS_MPA} MPa long-term design stress. {glass.panels.map((p) => `${p.panel[0].toUpperCase() + p.panel.slice(1)}: ${p.source}.`).join(" ")}
+          Walls checked full to the rim. Glass: modulus of rupture {stress(FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA)} with a safety factor of {DEFAULT_GLASS_SAFETY_FACTOR} (common
+          practice); acrylic: {stress(ACRYLIC_DESIGN_STRESS_MPA)} long-term design stress. {glass.panels.map((p) => `${p.panel[0].toUpperCase() + p.panel.slice(1)}: ${p.source}.`).join(" ")}
         </p>
         {!glass.ok && <Caution tone="danger">One or more panels don&apos;t pass: see the notes above before ordering glass.</Caution>}
         <ResultCautions cautions={glass.cautions ?? []} testId="glass-cautions" />
