@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { DEFAULT_CYCLE_RULES, resolveCycleRules, validateCycleRules } from "@/lib/cycling/cycle-rules";
 import { ammoniaPKa } from "@/lib/cycling/free-ammonia";
 import { validateReading, type ReadingInput } from "@/lib/cycling/readings";
-import { describeCycleForClient, describeTrend } from "@/lib/cycling/summary";
+import { describeCycleForClient, describeTrend, SMALLEST_TREND_CHANGE_MGL } from "@/lib/cycling/summary";
 import { readingWarnings, stallWarning, WARNING_THRESHOLDS } from "@/lib/cycling/warnings";
 import { capitalise, countWord, formatAgo, formatDuration, formatRuleHours, formatRuleSpan } from "@/lib/cycling/wording";
 import { at, reading } from "./cycle-fixtures";
@@ -177,11 +177,12 @@ describe("wording: edges", () => {
 describe("describeTrend and client text: edges", () => {
   const series = (values: number[]) => values.map((v, d) => reading(at(d), { nitriteMgL: v }));
 
-  it("a change of exactly the smallest kit step counts as rising or falling", () => {
-    expect(describeTrend(series([1, 1.25]), "nitrite")).toBe("rising");
-    expect(describeTrend(series([1, 0.75]), "nitrite")).toBe("falling");
-    expect(describeTrend(series([1, 1.125]), "nitrite")).toBe("steady");
-    expect(describeTrend(series([1, 1.125]), "nitrite", { minChangeMgL: 0.125 })).toBe("rising");
+  it("a change of exactly the smallest change that counts is rising or falling; less is steady", () => {
+    const step = SMALLEST_TREND_CHANGE_MGL.nitrite;
+    expect(describeTrend(series([1, 1 + step]), "nitrite")).toBe("rising");
+    expect(describeTrend(series([1, 1 - step]), "nitrite")).toBe("falling");
+    expect(describeTrend(series([1, 1 + step / 2]), "nitrite")).toBe("steady");
+    expect(describeTrend(series([1, 1 + step / 2]), "nitrite", { minChangeMgL: step / 2 })).toBe("rising");
   });
 
   it("looks back only the given number of days from the newest test, including its edge", () => {

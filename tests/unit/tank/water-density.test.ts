@@ -62,6 +62,13 @@ describe("seawaterDensity (EOS-80, Millero & Poisson 1981)", () => {
     expect(seawaterDensity(at68(25), 35)).toBeCloseTo(1023.343, 3);
   });
 
+  it("worked by hand from the EOS-80 coefficients at S = 40, t68 = 40 °C, where every coefficient shows", () => {
+    // Millero & Poisson (1981) polynomial, evaluated by hand from its printed coefficients:
+    // ρw = 992.2204027, A = 0.74421092, B = −0.00428122, C = 4.8314e-4
+    // ρ = 992.2204027 + 0.74421092 · 40 − 0.00428122 · 40^1.5 + 4.8314e-4 · 40² = 1021.678791 kg/m³
+    expect(seawaterDensity(at68(40), 40)).toBeCloseTo(1021.678791, 6);
+  });
+
   it("reproduces the other one-atmosphere check values", () => {
     // Millero & Poisson (1981) / UNESCO 44 check values (from memory): ρ(35, 5, 0) = 1027.67547,
     // ρ(0, 5, 0) = 999.96675, ρ(0, 25, 0) = 997.04796 kg/m³
