@@ -29,6 +29,8 @@ const schema = z.object({
   S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
   S3_FORCE_PATH_STYLE: bool,
+  /** Seconds a stage-change or shared-note e-mail waits in the outbox when the company has not set its own. */
+  NOTICE_DELAY_SECONDS: z.coerce.number().int().min(0).max(3600).default(120),
   /** Turns on development-only pages (the caught-mail viewer). Never set in production. */
   TANKWRIGHT_DEV_TOOLS: bool,
 });

@@ -8,5 +8,9 @@ export const company = pgTable("company", {
   phone: text("phone"),
   /** Partial cycle rules that override the defaults in lib/cycling. */
   cycleRules: jsonb("cycle_rules").$type<Record<string, unknown>>().notNull().default({}),
+  /** Expected days per stage that override the defaults in lib/stages/durations. */
+  stageDurations: jsonb("stage_durations").$type<Record<string, unknown>>().notNull().default({}),
+  /** How long a client notice waits in the outbox before it leaves; null uses the deployment's default. */
+  noticeDelaySeconds: integer("notice_delay_seconds"),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });
