@@ -56,8 +56,13 @@ export function BoardCard({ card, now, error, saving }: { card: Card; now: Date;
       <div className="mt-2 flex flex-wrap items-center gap-1.5 text-xs">
         <span className={overdue ? "font-semibold text-caution" : "text-muted"}>
           {days === 0 ? "Entered today" : `${days} ${days === 1 ? "day" : "days"} in stage`}
-          {overdue && " · overdue"}
+          {overdue && ` · late by ${card.lateBy} ${card.lateBy === 1 ? "day" : "days"}`}
         </span>
+        {card.unreadMessages > 0 && (
+          <Link href={`/projects/${card.id}/talk`} className="font-semibold text-accent hover:underline" data-testid="card-unread">
+            {card.unreadMessages} new {card.unreadMessages === 1 ? "message" : "messages"}
+          </Link>
+        )}
         <span className="ml-auto flex -space-x-1" aria-label={`People: ${people.map((p) => p.name).join(", ") || "nobody assigned"}`}>
           {people.map((p) => (
             <span

@@ -1,5 +1,5 @@
 import { and, desc, eq, inArray, isNull, sql } from "drizzle-orm";
-import type { Db, Tx } from "../index";
+import { db, type Db, type Tx } from "../index";
 import { notices, notificationPrefs, users, company } from "../schema";
 import type { Email } from "../../lib/mail/layout";
 import { env } from "../../env";
@@ -55,6 +55,12 @@ export async function enqueueNotice(
 export async function noticeDelaySeconds(tx: Tx | Db): Promise<number> {
   const [row] = await tx.select({ seconds: company.noticeDelaySeconds }).from(company).limit(1);
   return row?.seconds ?? env().NOTICE_DELAY_SECONDS;
+}
+
+/** The company's own notice delay in seconds, or null when it uses the deployment's default. */
+export async function getCompanyNoticeDelay(): Promise<number | null> {
+  const [row] = await db().select({ seconds: company.noticeDelaySeconds }).from(company).limit(1);
+  return row?.seconds ?? null;
 }
 
 /** When a notice queued now may leave. */

@@ -3,19 +3,29 @@ import { requirePageUser } from "@/server/session";
 import { getCompanyCycleRules } from "@/db/queries/cycle-state";
 import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
 import { CycleRulesForm } from "./_components/cycle-rules-form";
+import { TimingForm } from "./_components/timing-form";
+import { getStageDurationOverrides } from "@/db/queries/stage-durations";
+import { DEFAULT_STAGE_DURATIONS } from "@/lib/stages/durations";
+import { getCompanyNoticeDelay } from "@/db/queries/outbox";
+import { env } from "@/env";
 
 export const metadata: Metadata = { title: "Settings" };
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const overrides = await getCompanyCycleRules();
+  const [overrides, durationOverrides, companyDelay] = await Promise.all([getCompanyCycleRules(), getStageDurationOverrides(), getCompanyNoticeDelay()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
         <h1 className="text-2xl font-bold tracking-tight">Settings</h1>
         <p className="text-sm text-muted">Company-wide rules. Changes apply to every project from the moment they are saved.</p>
       </div>
+      <TimingForm
+        overrides={durationOverrides}
+        defaults={{ ...DEFAULT_STAGE_DURATIONS }}
+        noticeDelay={{ companySeconds: companyDelay, defaultSeconds: env().NOTICE_DELAY_SECONDS }}
+      />
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
     </div>
   );

@@ -21,5 +21,5 @@ export const POST = route<Params>(async (req, { params }) => {
   const user = await requireUser();
   const { project } = await requireProject({ projectId: id, user, action: "write_note" });
   const note = await createNote({ project, author: user, body: input.body, shared: input.shared });
-  return NextResponse.json({ id: note.id, shared: note.shared, body: note.body }, { status: 201 });
+  return NextResponse.json({ id: note.id, shared: note.shared, body: note.body, email: note.email }, { status: 201 });
 });

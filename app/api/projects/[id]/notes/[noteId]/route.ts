@@ -16,5 +16,5 @@ export const PATCH = route<Params>(async (req, { params }) => {
   const { project } = await requireProject({ projectId: id, user, action: "write_note" });
   const note = await setNoteSharing({ project, noteId: parseId(noteId, "That note"), shared: input.shared, by: user });
   if (!note) throw notFound("That note");
-  return NextResponse.json({ id: note.id, shared: note.shared });
+  return NextResponse.json({ id: note.id, shared: note.shared, email: note.email, takenBack: note.takenBack, alreadySent: note.alreadySent });
 });
