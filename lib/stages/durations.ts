@@ -55,7 +55,7 @@ export function resolveStageDurations(overrides: Partial<Record<string, unknown>
 export type Lateness = {
   /** When the card was expected to leave its current stage; null when the stage has no expected end. */
   expectedBy: string | null;
-  /** Whole days past expectedBy; 0 when on time or early. */
+  /** Whole days past expectedBy (at least 1 once past it); 0 when on time or early. */
   lateBy: number;
 };
 
@@ -65,5 +65,6 @@ export function stageLateness(card: { stage: Stage; stageEnteredAt: string | Dat
   if (days === null) return { expectedBy: null, lateBy: 0 };
   const expected = new Date(new Date(card.stageEnteredAt).getTime() + days * DAY);
   const over = now.getTime() - expected.getTime();
-  return { expectedBy: expected.toISOString(), lateBy: over > 0 ? Math.ceil(over / DAY) : 0 };
+  // Whole days late, but never "late by 0 days" once past the expected end.
+  return { expectedBy: expected.toISOString(), lateBy: over > 0 ? Math.max(1, Math.floor(over / DAY)) : 0 };
 }

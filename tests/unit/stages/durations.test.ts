@@ -31,7 +31,7 @@ describe("stage durations", () => {
     expect(stageLateness({ stage: "cycling", stageEnteredAt: daysAgo(20) }, d, now)).toEqual({ expectedBy: daysAgo(-22), lateBy: 0 });
     // Five days in a three-day fill & leak test is two days late.
     expect(stageLateness({ stage: "fill_leak_test", stageEnteredAt: daysAgo(5) }, d, now).lateBy).toBe(2);
-    // A part day over counts as a day late.
+    // Any part of a day over is at least one day late.
     expect(stageLateness({ stage: "fill_leak_test", stageEnteredAt: new Date(now.getTime() - 3.2 * 86_400_000) }, d, now).lateBy).toBe(1);
     expect(stageLateness({ stage: "in_service", stageEnteredAt: daysAgo(400) }, d, now)).toEqual({ expectedBy: null, lateBy: 0 });
   });
