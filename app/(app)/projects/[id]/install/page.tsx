@@ -44,7 +44,7 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
   const dayItems = items.filter((i) => DAY_STAGES.includes(i.stage));
   const initial: Record<string, DayState> = {};
   for (const [itemId, t] of latestTicks(ticks)) {
-    initial[itemId] = { done: t.done, note: t.note, value: t.value, attachmentId: t.attachmentId, byName: t.byName, at: t.at.toISOString() };
+    initial[itemId] = { done: t.done, note: t.note, value: t.value, attachmentId: t.attachmentId, byName: t.byName, mine: t.byUserId === user.id, at: t.at.toISOString() };
   }
   const footprint = bedFootprintFromDesign(design);
   const substrate = design && typeof design.substrate === "object" ? (design.substrate as { type?: string; depthMm?: number }) : null;

@@ -13,7 +13,7 @@ export const GET = route<Params>(async (_req, ctx) => {
   const { id } = await ctx.params;
   const user = await requireUser();
   const { project } = await requireProject({ projectId: id, user, action: "view" });
-  return NextResponse.json({ tests: await listWaterTests(project.id) });
+  return NextResponse.json({ tests: await listWaterTests(project.id, { includeVoided: user.role !== "client" }) });
 });
 
 /** Logs a water test taken by the signed-in person (crew, the lead, or the project's client). */

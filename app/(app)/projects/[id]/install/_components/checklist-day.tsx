@@ -23,7 +23,7 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
   const [confirmed, setConfirmed] = useState<Record<string, DayState>>(initial);
 
   const onSaved = useCallback((t: { itemId: string; at: string }, q: QueuedTick) => {
-    const saved: DayState = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, at: t.at, pending: false };
+    const saved: DayState = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, mine: true, at: t.at, pending: false };
     setConfirmed((c) => ({ ...c, [q.itemId]: saved }));
     setStates((s) => (s[q.itemId]?.pending && s[q.itemId]?.at === q.queuedAt ? { ...s, [q.itemId]: saved } : s));
   }, [me.name]);
@@ -46,7 +46,7 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
     setStates((s) => {
       const next = { ...s };
       for (const q of queue) {
-        if (!next[q.itemId]?.pending) next[q.itemId] = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, at: q.queuedAt, pending: true };
+        if (!next[q.itemId]?.pending) next[q.itemId] = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, mine: true, at: q.queuedAt, pending: true };
       }
       return next;
     });
@@ -58,7 +58,7 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
       return rest;
     });
     const q = enqueue({ itemId, ...t });
-    setStates((s) => ({ ...s, [itemId]: { ...t, byName: me.name, at: q.queuedAt, pending: true } }));
+    setStates((s) => ({ ...s, [itemId]: { ...t, byName: me.name, mine: true, at: q.queuedAt, pending: true } }));
   }
 
   return (
