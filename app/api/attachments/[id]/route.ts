@@ -19,6 +19,8 @@ export const GET = route<{ id: string }>(async (req, { params }) => {
   } catch {
     throw notFound("That file");
   }
+  // A voided photo stays on record for the team only.
+  if (a.voidedAt && user.role === "client") throw notFound("That file");
   const thumb = new URL(req.url).searchParams.get("variant") === "thumb" && a.thumbKey;
   const url = thumb
     ? await presignGet(a.thumbKey!, { contentType: "image/webp" })
