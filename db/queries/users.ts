@@ -100,7 +100,7 @@ async function issueInvitation(
     createdBy: invitedBy,
   });
   const url = `${env().APP_URL}/invitation/${token}`;
-  const email = invitationEmail({ companyName: await companyName(tx), name: user.name, roleLabel: ROLE_LABELS[user.role], url, expiresInDays: INVITATION_DAYS });
+  const email = invitationEmail({ companyName: await companyName(tx), name: user.name, roleLabel: ROLE_LABELS[user.role], role: user.role, url, expiresInDays: INVITATION_DAYS });
   await enqueueNotice(tx, { kind: "invitation", recipientId: user.id, toEmail: user.email, email });
 }
 

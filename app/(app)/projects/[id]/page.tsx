@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { ClientOverview } from "./_components/client-overview";
 import { StaffOverview } from "./_components/staff-overview";
 
-export const metadata: Metadata = { title: "Project" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Overview");
 
 export default async function ProjectOverviewPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;

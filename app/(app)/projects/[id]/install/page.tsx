@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { listChecklistItems, listProjectTicks } from "@/db/queries/checklists";
 import { getDesignData, getUnitSystem, listMaterials } from "@/db/queries/materials";
 import { listLeakChecks } from "@/db/queries/leak-checks";
@@ -15,7 +15,7 @@ import { MaterialsPanel } from "./_components/materials-panel";
 import { FillPanel } from "./_components/fill-panel";
 import type { DayState } from "./_components/checklist-types";
 
-export const metadata: Metadata = { title: "Install day" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Install day");
 
 const DAY_STAGES: Stage[] = ["stand_load_check", "aquascape", "fill_leak_test"];
 

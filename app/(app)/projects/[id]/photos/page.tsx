@@ -1,14 +1,14 @@
 import type { Metadata } from "next";
 import { format } from "date-fns";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { listProjectAttachments, listVoidedPhotos } from "@/db/queries/attachments";
 import { PhotoActions } from "./_components/photo-actions";
 import { STAGE_LABELS, STAGES } from "@/lib/stages/stages";
 import { EmptyState } from "@/components/ui/empty-state";
 import { GalleryUpload } from "./_components/gallery-upload";
 
-export const metadata: Metadata = { title: "Photos" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Photos");
 
 /** The project's photos and documents by stage, for the lead, the assigned crew and the owning client. */
 export default async function PhotosPage({ params }: { params: Promise<{ id: string }> }) {

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { format } from "date-fns";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { listMessages } from "@/db/queries/messages";
 import { listNotes, noteAudience, pendingNoteEmails } from "@/db/queries/notes";
 import { db } from "@/db";
@@ -12,7 +12,7 @@ import { MessageForm } from "./_components/message-form";
 import { NoteForm } from "./_components/note-form";
 import { ShareToggle } from "./_components/share-toggle";
 
-export const metadata: Metadata = { title: "Messages & notes" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Messages & notes");
 export const dynamic = "force-dynamic";
 
 export default async function TalkPage({ params }: { params: Promise<{ id: string }> }) {

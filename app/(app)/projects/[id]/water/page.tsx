@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { getCycleEvaluation, getCycleStartedAt } from "@/db/queries/cycle-state";
 import { getDesignVolume, getUnitSystem, listDoses, listWaterTests } from "@/db/queries/water";
 import { listStockingBatches } from "@/db/queries/stocking";
@@ -17,7 +17,7 @@ import { canUndoOwn, undoDeadline } from "@/lib/install/undo-window";
 import { READING_LIMITS } from "@/lib/cycling/readings";
 import { format } from "date-fns";
 
-export const metadata: Metadata = { title: "Water & cycling" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Water & cycling");
 
 const DAY_MS = 86_400_000;
 
