@@ -137,3 +137,9 @@ export async function acceptInvitation(token: string, password: string) {
   });
 }
 
+
+/** A person's name and e-mail, or null. */
+export async function getUserContact(userId: string): Promise<{ name: string; email: string } | null> {
+  const [row] = await db().select({ name: users.name, email: users.email }).from(users).where(eq(users.id, userId));
+  return row ?? null;
+}

@@ -18,5 +18,7 @@ export const POST = route(async (req) => {
   const input = await parseJson(req, projectCreateSchema);
   const user = await requireUser("lead");
   const project = await createProject(input, user.id);
-  return NextResponse.json({ id: project.id, title: project.title, stage: project.stage, version: project.version }, { status: 201 });
+  // A new client was invited in the same step; the form says so.
+  const invited = input.clientMode === "new" ? { name: input.clientName, email: input.clientEmail } : null;
+  return NextResponse.json({ id: project.id, title: project.title, stage: project.stage, version: project.version, invited }, { status: 201 });
 });

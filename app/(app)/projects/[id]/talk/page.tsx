@@ -5,6 +5,7 @@ import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { listMessages } from "@/db/queries/messages";
 import { listNotes, noteAudience, pendingNoteEmails } from "@/db/queries/notes";
 import { db } from "@/db";
+import { markMessagesRead } from "@/db/queries/message-reads";
 import { noticeDelaySeconds } from "@/db/queries/outbox";
 import { leavesAtSentence } from "@/lib/mail/notice-delay";
 import { ROLE_LABELS } from "@/lib/auth/roles";
@@ -22,6 +23,8 @@ export default async function TalkPage({ params }: { params: Promise<{ id: strin
   const isClient = user.role === "client";
   // The filter is in the query's `where`: a client's page never loads an internal note.
   const isLead = user.role === "lead";
+  // Opening the page reads the messages: the board's and the navigation's unread counts drop.
+  if (!isClient) await markMessagesRead(user.id, project.id);
   const [messages, notes, audience, pendingEmails, delaySeconds] = await Promise.all([
     listMessages(project.id),
     listNotes(project.id, { sharedOnly: isClient }),
