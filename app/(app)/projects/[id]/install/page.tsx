@@ -50,7 +50,7 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
   const substrate = design && typeof design.substrate === "object" ? (design.substrate as { type?: string; depthMm?: number }) : null;
 
   return (
-    <div className="mx-auto flex w-full max-w-2xl flex-col gap-8">
+    <div className="mx-auto flex w-full max-w-2xl flex-col gap-8 lg:max-w-none">
       <nav aria-label="On this page" className="flex flex-wrap gap-2 text-sm">
         {[
           ["#stage-stand_load_check", "Stand & load"],
@@ -80,6 +80,7 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
       ) : (
         <EmptyState title="No checklist items yet">The lead adds them on the Checklists page.</EmptyState>
       )}
+      <div className="grid items-start gap-8 lg:grid-cols-2">
       <MaterialsPanel
         projectId={project.id}
         units={units}
@@ -99,6 +100,7 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
         designVolumeL={netVolumeFrom(design)}
         initial={checks.map((c) => ({ ...c, at: c.at.toISOString() }))}
       />
+      </div>
     </div>
   );
 }

@@ -62,9 +62,10 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
   }
 
   return (
-    <div className="flex flex-col gap-6">
+    // Phone first, one column; a desktop uses its width with a column per stage.
+    <div className="grid items-start gap-6 lg:grid-cols-2 2xl:grid-cols-3" data-testid="checklist-columns">
       {queue.length > 0 && (
-        <div role="status" data-testid="pending-ticks" className="sticky top-14 z-20 flex flex-wrap items-center gap-3 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm">
+        <div role="status" data-testid="pending-ticks" className="sticky top-14 z-20 col-span-full flex flex-wrap items-center gap-3 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm">
           <span className="font-semibold text-caution">{pendingLabel(queue.length)}</span>
           <span className="text-ink/80">{lastError ?? "Sending…"}</span>
           <button type="button" onClick={retryNow} className={`${buttonStyles.secondary} ml-auto min-h-11`}>
