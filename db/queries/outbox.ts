@@ -4,7 +4,7 @@ import { notices, notificationPrefs, users, company } from "../schema";
 import type { Email } from "../../lib/mail/layout";
 import { env } from "../../env";
 
-export type NoticeKind = "invitation" | "stage_change" | "cycle_ready" | "shared_note" | "message";
+export type NoticeKind = "invitation" | "stage_change" | "cycle_ready" | "shared_note" | "message" | "receipt";
 
 /**
  * Writes an e-mail to the outbox inside the caller's transaction and queues the job that sends it,
@@ -25,7 +25,8 @@ export async function enqueueNotice(
     meta?: Record<string, unknown>;
   },
 ): Promise<string | null> {
-  if (opts.kind !== "invitation") {
+  // Invitations and payment receipts always go: they are not notices a person can turn off.
+  if (opts.kind !== "invitation" && opts.kind !== "receipt") {
     const [pref] = await tx
       .select({ enabled: notificationPrefs.enabled })
       .from(notificationPrefs)

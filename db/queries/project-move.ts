@@ -5,11 +5,11 @@ import { projects, stageEvents } from "../schema";
 import { loadGateFacts } from "./gate-facts";
 import { queueStageChangeNotices } from "./stage-change-notices";
 import { getCycleStartedAt } from "./cycle-state";
+import { issueInstalmentsOnMove } from "./invoices";
 import { checkGate, moveDirection, needsCycleFacts } from "../../lib/stages/gates";
 import { keyForPlacement, type Placement } from "../../lib/stages/ordering";
 import { stageIndex, type Stage } from "../../lib/stages/stages";
 import { AppError, badRequest, conflict, forbidden, notFound, unprocessable } from "../../server/errors";
-import type { SessionUser } from "../../server/session";
 
 export const STALE_MESSAGE = "Someone else moved or changed this card; the board has been refreshed.";
 
@@ -41,11 +41,11 @@ export const COLUMN_LOCK_SPACE = 7301;
  * between its neighbours as they are now (under a per-column lock, so concurrent drops into one
  * column get distinct keys), records the stage change and queues its notices, all in one transaction.
  */
-export async function moveProject(projectId: string, input: MoveInput, user: Pick<SessionUser, "id" | "role">, now = new Date()): Promise<MoveResult> {
-  if (input.overrideReason && user.role !== "lead") {
+export async function moveProject(projectId: string, input: MoveInput, user: { id: string; canOverride: boolean }, now = new Date()): Promise<MoveResult> {
+  if (input.overrideReason && !user.canOverride) {
     throw forbidden("Only the lead can pass a closed gate. Finish what the gate asks for, or ask the lead.");
   }
-  if (input.restartCycle && user.role !== "lead") {
+  if (input.restartCycle && !user.canOverride) {
     throw forbidden("Only the lead can restart a cycle.");
   }
   if (input.restartCycle && input.toStage !== "cycling") {
@@ -73,9 +73,9 @@ export async function moveProject(projectId: string, input: MoveInput, user: Pic
       const gate = checkGate({ from, to, facts });
       if (!gate.open) {
         if (!input.overrideReason) {
-          throw unprocessable(user.role === "lead" ? "The gate is closed. Give a reason to pass it anyway, or finish what it asks for." : "The gate is closed. Finish what it asks for, or ask the lead.", {
+          throw unprocessable(user.canOverride ? "The gate is closed. Give a reason to pass it anyway, or finish what it asks for." : "The gate is closed. Finish what it asks for, or ask the lead.", {
             reasons: gate.reasons,
-            canOverride: user.role === "lead",
+            canOverride: user.canOverride,
           });
         }
         override = true;
@@ -121,6 +121,8 @@ export async function moveProject(projectId: string, input: MoveInput, user: Pic
       const why = override ? input.overrideReason!.trim() : reason;
       await tx.insert(stageEvents).values({ projectId, fromStage: from, toStage: to, byUserId: user.id, at: now, reason: why, override, gateReasons, cycleRestarted: restarted });
       await queueStageChangeNotices(tx, { projectId, fromStage: from, toStage: to, byUserId: user.id, override, reason: why }, now);
+      // Install day and handover bill their instalments of the accepted quote, with the move.
+      await issueInstalmentsOnMove(tx, { projectId, from, to, now });
     }
     return {
       id: updated.id,

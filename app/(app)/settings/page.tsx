@@ -2,19 +2,21 @@ import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
 import { getCompanyCycleRules } from "@/db/queries/cycle-state";
 import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
+import { listTestKits } from "@/db/queries/test-kits";
 import { CycleRulesForm } from "./_components/cycle-rules-form";
 import { TimingForm } from "./_components/timing-form";
 import { getStageDurationOverrides } from "@/db/queries/stage-durations";
 import { DEFAULT_STAGE_DURATIONS } from "@/lib/stages/durations";
 import { getCompanyNoticeDelay } from "@/db/queries/outbox";
 import { env } from "@/env";
+import { TestKitsPanel } from "./_components/test-kits-panel";
 
 export const metadata: Metadata = { title: "Settings" };
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const [overrides, durationOverrides, companyDelay] = await Promise.all([getCompanyCycleRules(), getStageDurationOverrides(), getCompanyNoticeDelay()]);
+  const [overrides, kits, durationOverrides, companyDelay] = await Promise.all([getCompanyCycleRules(), listTestKits(), getStageDurationOverrides(), getCompanyNoticeDelay()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -27,6 +29,7 @@ export default async function SettingsPage() {
         noticeDelay={{ companySeconds: companyDelay, defaultSeconds: env().NOTICE_DELAY_SECONDS }}
       />
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
+      <TestKitsPanel kits={kits} />
     </div>
   );
 }

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { timingSchema, type TimingInput, type TimingValues } from "../timing.schema";
+import { timingSchema, type TimingInput, type TimingValues } from "@/app/api/settings/timing/timing.schema";
 import { STAGE_LABELS } from "@/lib/stages/stages";
 import { TIMED_STAGES, type StageDurations } from "@/lib/stages/durations";
 import { sendJson } from "@/lib/http/send-json";

@@ -16,6 +16,8 @@ import { toReadingView, toDoseView, toBatchView } from "./_components/views";
 import { canUndoOwn, undoDeadline } from "@/lib/install/undo-window";
 import { READING_LIMITS } from "@/lib/cycling/readings";
 import { format } from "date-fns";
+import { KitChoice } from "./_components/kit-choice";
+import { getProjectKits, listTestKits } from "@/db/queries/test-kits";
 
 export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Water & cycling");
 
@@ -36,10 +38,13 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
   const canVoid = canOnProject(relation, "void_water_test");
   const canStock = canOnProject(relation, "record_stocking");
   const fishStage = project.stage === "first_stocking" || project.stage === "in_service";
-  const [doses, volume, batches] = await Promise.all([
+  const canChooseKits = canOnProject(relation, "edit_details");
+  const [doses, volume, batches, kits, companyKits] = await Promise.all([
     canDose ? listDoses(project.id) : Promise.resolve([]),
     canDose ? getDesignVolume(project.id) : Promise.resolve(null),
     listStockingBatches(project.id),
+    getProjectKits(project.id),
+    canChooseKits ? listTestKits() : Promise.resolve([]),
   ]);
 
   // The chart shows what the gate counts: this cycle's readings, none dated in the future, on the
@@ -90,7 +95,9 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
         )}
       </section>
 
-      <WaterTestForm projectId={project.id} unitSystem={unitSystem} />
+      {canChooseKits && <KitChoice projectId={project.id} chosen={kits} kits={companyKits} />}
+
+      <WaterTestForm projectId={project.id} unitSystem={unitSystem} kits={kits} />
 
       <ReadingsTable projectId={project.id} rows={tests.map(toReadingView)} unitSystem={unitSystem} canVoid={canVoid} takeBack={takeBack} />
 

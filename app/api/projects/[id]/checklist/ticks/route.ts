@@ -1,8 +1,7 @@
 import { NextResponse } from "next/server";
-import { parseJson, route } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
-import { latestTick, recordTick } from "@/db/queries/checklists";
+import { projectRoute, requireAction } from "@/server/route";
+import { recordTick } from "@/db/queries/checklists";
+import { latestTick } from "@/db/queries/checklists";
 import { canOnProject } from "@/lib/auth/permissions";
 import { canUndoOwn, UNDO_WINDOW_MINUTES } from "@/lib/install/undo-window";
 import { forbidden } from "@/server/errors";
@@ -13,10 +12,8 @@ import { tickSchema } from "../tick.schema";
  * their own tick within the undo window (a mis-tap). The same clientKey sent again answers 200 with
  * the stored tick and adds nothing.
  */
-export const POST = route<{ id: string }>(async (req, { params }) => {
-  const input = await parseJson(req, tickSchema);
-  const user = await requireUser();
-  const { project, relation } = await requireProject({ projectId: (await params).id, user, action: "tick_checklist" });
+export const POST = projectRoute({ action: "tick_checklist", schema: tickSchema }, async ({ input, project, relation, user }) => {
+  // Crew may undo their own tick inside the undo window; any other untick is the lead's.
   if (!input.done && !canOnProject(relation, "untick_checklist")) {
     const last = await latestTick(project.id, input.itemId);
     if (!last || !last.done || !canUndoOwn({ byUserId: last.byUserId, at: last.at }, user.id, new Date())) {
