@@ -38,6 +38,8 @@ const schema = z.object({
   PAYMENTS_SECRET_KEY: z.string().min(8).optional(),
   /** The secret the payment service signs webhooks with; required in production. */
   PAYMENTS_WEBHOOK_SECRET: z.string().min(8).optional(),
+  /** Seconds a stage-change or shared-note e-mail waits in the outbox when the company has not set its own. */
+  NOTICE_DELAY_SECONDS: z.coerce.number().int().min(0).max(3600).default(120),
   /** Turns on development-only pages (the caught-mail viewer). Never set in production. */
   TANKWRIGHT_DEV_TOOLS: bool,
 });

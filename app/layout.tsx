@@ -7,6 +7,14 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Tankwright", template: "%s · Tankwright" },
   description: "Custom aquarium projects from site survey to a living tank.",
+  manifest: "/manifest.webmanifest",
+  icons: {
+    icon: [
+      { url: "/icon.svg", type: "image/svg+xml" },
+      { url: "/favicon.ico", sizes: "32x32" },
+    ],
+    apple: "/apple-touch-icon.png",
+  },
 };
 
 // Every page depends on who is signed in.

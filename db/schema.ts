@@ -10,3 +10,4 @@ export * from "./schema/talk";
 export * from "./schema/visits";
 export * from "./schema/test-kits";
 export * from "./schema/money";
+export * from "./schema/message-reads";

@@ -67,6 +67,8 @@ pg_up "test-$slot" "$PG_PORT" fast
 pg_createdb "$PG_PORT" tankwright_test fresh
 export DATABASE_URL=postgres://tankwright@127.0.0.1:$PG_PORT/tankwright_test
 export NEXTAUTH_SECRET=test-secret-for-the-test-run-only
+# Notices leave at once in tests unless a test sets the company's own delay.
+export NOTICE_DELAY_SECONDS=0
 export APP_URL=http://127.0.0.1:$PORT NEXTAUTH_URL=http://127.0.0.1:$PORT TEST_APP_URL=http://127.0.0.1:$PORT
 rm -rf ".data/s3-test-$slot"
 start_fakes "$SMTP_P" "$MAILAPI_P" "$S3_P" "$PROJECT_ROOT/.data/s3-test-$slot" "$PAY_P"

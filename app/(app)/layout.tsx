@@ -6,11 +6,13 @@ import { ROLE_HOME, ROLE_LABELS } from "@/lib/auth/roles";
 import { Logo } from "@/components/ui/logo";
 import { navItemsFor } from "@/components/shell/nav-items";
 import { NavLinks } from "@/components/shell/nav-links";
+import { unreadClientMessages } from "@/db/queries/message-reads";
 import { SignOutButton } from "@/components/shell/sign-out-button";
 
 export default async function AppLayout({ children }: { children: ReactNode }) {
   const user = await requirePageUser();
-  const items = navItemsFor(user.role, env().TANKWRIGHT_DEV_TOOLS);
+  const unread = user.role === "lead" ? await unreadClientMessages(user) : 0;
+  const items = navItemsFor(user.role, env().TANKWRIGHT_DEV_TOOLS, unread);
   return (
     <div className="flex min-h-screen flex-col">
       <header className="no-print sticky top-0 z-30 border-b border-line bg-card/95 backdrop-blur">

@@ -76,6 +76,11 @@ export function BoardCard({ card, now, error, saving, onMoveTo }: { card: Card; 
       <p className="mt-1.5 text-xs text-ink" data-testid="card-people">
         {peopleWords(card.leadName, card.crew.map((c) => c.name))}
       </p>
+      {card.unreadMessages > 0 && (
+        <Link href={`/projects/${card.id}/talk`} className="text-xs font-semibold text-accent hover:underline" data-testid="card-unread">
+          {card.unreadMessages} new {card.unreadMessages === 1 ? "message" : "messages"} from the client
+        </Link>
+      )}
       <ul className="text-xs" data-testid="card-lines">
         {lines.map((l) => (
           <li key={l.key} className={LINE_TONE[l.tone]}>

@@ -30,7 +30,7 @@ export function BoardFilters({ filters, people, onChange, shown, total }: { filt
       </div>
       <label className="flex items-center gap-2 pb-2 text-sm">
         <input type="checkbox" checked={!!filters.overdue} onChange={(e) => onChange({ ...filters, overdue: e.target.checked || undefined })} />
-        Overdue or stuck only
+        Late for their stage only
       </label>
       <p className="pb-2 text-xs text-muted" aria-live="polite">
         {shown === total ? `${total} projects` : `Showing ${shown} of ${total} projects`}

@@ -17,6 +17,12 @@ export function NavLinks({ items }: { items: NavItem[] }) {
             className={`whitespace-nowrap rounded-lg px-3 py-1.5 text-sm font-medium ${active ? "bg-accent-soft text-accent-strong" : "text-muted hover:bg-paper hover:text-ink"}`}
           >
             {item.label}
+            {item.badge && (
+              <span className="ml-1.5 rounded-full bg-accent px-1.5 py-0.5 text-xs font-semibold text-white" data-testid="nav-unread" title={item.badge.label}>
+                {item.badge.count}
+                <span className="sr-only"> {item.badge.label}</span>
+              </span>
+            )}
           </Link>
         );
       })}

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, isNotNull, isNull } from "drizzle-orm";
 import { db } from "../index";
 import { attachments, users } from "../schema";
 import type { Stage } from "../../lib/stages/stages";
@@ -39,13 +39,23 @@ export async function markAttachmentReady(id: string, thumbKey: string | null, s
 
 export type PhotoView = AttachmentRow & { uploadedByName: string };
 
-/** A project's finished uploads, oldest first, with who sent each. */
+/** A project's finished uploads that aren't voided, oldest first, with who sent each. */
 export async function listProjectAttachments(projectId: string): Promise<PhotoView[]> {
   const rows = await db()
     .select({ a: attachments, name: users.name })
     .from(attachments)
     .innerJoin(users, eq(users.id, attachments.uploadedBy))
-    .where(and(eq(attachments.projectId, projectId), eq(attachments.status, "ready")))
+    .where(and(eq(attachments.projectId, projectId), eq(attachments.status, "ready"), isNull(attachments.voidedAt)))
     .orderBy(asc(attachments.uploadedAt));
   return rows.map((r) => ({ ...r.a, uploadedByName: r.name }));
+}
+
+/** Voided photos, for the team's record: who voided each and why. */
+export async function listVoidedPhotos(projectId: string) {
+  return db()
+    .select({ id: attachments.id, fileName: attachments.fileName, caption: attachments.caption, voidedAt: attachments.voidedAt, voidReason: attachments.voidReason, byName: users.name })
+    .from(attachments)
+    .innerJoin(users, eq(users.id, attachments.voidedBy))
+    .where(and(eq(attachments.projectId, projectId), isNotNull(attachments.voidedAt)))
+    .orderBy(asc(attachments.voidedAt));
 }

@@ -4,7 +4,9 @@ import { projects } from "../schema";
 import { visibleProjectsWhere } from "./project-access";
 import { queryPrepared } from "./prepared";
 import { cycleVerdict, loadCycleInputs, loadRecordFacts, toGateFacts } from "./gate-facts";
+import { getStageDurations } from "./stage-durations";
 import { nextStageNeeds } from "../../lib/stages/gates";
+import { stageLateness } from "../../lib/stages/durations";
 import type { Stage } from "../../lib/stages/stages";
 import type { SessionUser } from "../../server/session";
 
@@ -21,6 +23,12 @@ export type BoardCard = {
   version: number;
   stageEnteredAt: string;
   targetInstallDate: string | null;
+  /** When the card was expected to leave its stage (the company's stage durations); null in service. */
+  expectedBy: string | null;
+  /** Whole days past expectedBy; 0 when on time. */
+  lateBy: number;
+  /** Messages from the client the caller hasn't read yet. */
+  unreadMessages: number;
   leadId: string | null;
   leadName: string | null;
   crew: BoardPerson[];
@@ -43,6 +51,7 @@ type Row = {
   lead_id: string | null;
   lead_name: string | null;
   crew: BoardPerson[] | null;
+  unread: number;
 };
 
 /**
@@ -57,7 +66,10 @@ export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new
       ${projects.stage} as stage, ${projects.position} as position, ${projects.version} as version,
       ${projects.stageEnteredAt} as stage_entered_at, ${projects.targetInstallDate}::text as target_install_date,
       ${projects.leadId} as lead_id, l.name as lead_name,
-      cr.crew
+      cr.crew,
+      (select count(*)::int from messages m
+        where m.project_id = ${projects.id} and m.author_id = ${projects.clientId}
+          and m.created_at > coalesce((select mr.read_at from message_reads mr where mr.project_id = ${projects.id} and mr.user_id = ${user.id}), '-infinity'::timestamptz)) as unread
     from ${projects}
     join users c on c.id = ${projects.clientId}
     left join users l on l.id = ${projects.leadId}
@@ -69,10 +81,11 @@ export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new
     order by ${projects.stage}, ${projects.position} collate "C", ${projects.id}
   `);
   // The cards, their records and the cycling cards' readings are read side by side: one round trip.
-  const [res, records, cycleInputs] = await Promise.all([
+  const [res, records, cycleInputs, durations] = await Promise.all([
     rowsQuery,
     loadRecordFacts({ where: visible }),
     loadCycleInputs({ where: and(visible, eq(projects.stage, "cycling"))! }),
+    getStageDurations(),
   ]);
   const rows = res;
   const people = new Map<string, BoardPerson>();
@@ -92,6 +105,8 @@ export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new
       version: r.version,
       stageEnteredAt: new Date(r.stage_entered_at).toISOString(),
       targetInstallDate: r.target_install_date,
+      ...stageLateness({ stage: r.stage, stageEnteredAt: new Date(r.stage_entered_at) }, durations, now),
+      unreadMessages: r.unread ?? 0,
       leadId: r.lead_id,
       leadName: r.lead_name,
       crew,

@@ -81,6 +81,7 @@ export type TickView = {
   id: string;
   itemId: string;
   done: boolean;
+  byUserId: string;
   note: string | null;
   value: number | null;
   attachmentId: string | null;
@@ -97,6 +98,7 @@ const tickColumns = {
   value: checklistTicks.value,
   attachmentId: checklistTicks.attachmentId,
   byName: users.name,
+  byUserId: checklistTicks.byUserId,
   at: checklistTicks.at,
   seq: checklistTicks.seq,
 };
@@ -120,6 +122,17 @@ export async function listItemTicks(projectId: string, itemId: string): Promise<
     .where(and(eq(checklistTicks.projectId, projectId), eq(checklistTicks.itemId, itemId)))
     .orderBy(desc(checklistTicks.seq));
   return rows.map((r) => ({ ...r, seq: r.seq ?? 0 }));
+}
+
+/** The newest tick row of one item on a project: the item's state. */
+export async function latestTick(projectId: string, itemId: string) {
+  const [row] = await db()
+    .select()
+    .from(checklistTicks)
+    .where(and(eq(checklistTicks.projectId, projectId), eq(checklistTicks.itemId, itemId)))
+    .orderBy(desc(checklistTicks.seq))
+    .limit(1);
+  return row ?? null;
 }
 
 export type TickInput = { itemId: string; done: boolean; note?: string | null; value?: number | null; attachmentId?: string | null; clientKey: string };

@@ -10,7 +10,7 @@ export async function readyPhotos(projectId: string, limit = 12) {
   return db()
     .select({ id: attachments.id, caption: attachments.caption, fileName: attachments.fileName, uploadedAt: attachments.uploadedAt, isProblem: attachments.isProblem })
     .from(attachments)
-    .where(and(eq(attachments.projectId, projectId), eq(attachments.status, "ready")))
+    .where(and(eq(attachments.projectId, projectId), eq(attachments.status, "ready"), isNull(attachments.voidedAt)))
     .orderBy(desc(attachments.uploadedAt))
     .limit(limit);
 }

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, isNull } from "drizzle-orm";
 import { db, type Db, type Tx } from "../index";
-import { ammoniaDoses, company, stageEvents, waterTests } from "../schema";
+import { ammoniaDoses, company, projects, stageEvents, waterTests } from "../schema";
 import { evaluateCycle, type CycleEvaluation } from "../../lib/cycling/evaluate-cycle";
 import { DEFAULT_CYCLE_RULES, validateCycleRules, type CycleRules } from "../../lib/cycling/cycle-rules";
 import type { AmmoniaDose, WaterTest } from "../../lib/cycling/readings";
@@ -21,8 +21,13 @@ export async function getCompanyCycleRules(conn: Db | Tx = db()): Promise<Partia
   return rules as Partial<CycleRules>;
 }
 
-/** When the project last entered cycling, or null if it never has. */
+/**
+ * When the project's current cycle began: its recorded start, or for projects from before that was
+ * kept, when it last entered cycling. Null if it never has.
+ */
 export async function getCycleStartedAt(projectId: string, conn: Db | Tx = db()): Promise<Date | null> {
+  const [project] = await conn.select({ at: projects.cycleStartedAt }).from(projects).where(eq(projects.id, projectId));
+  if (project?.at) return project.at;
   const [row] = await conn
     .select({ at: stageEvents.at })
     .from(stageEvents)

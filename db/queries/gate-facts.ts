@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, desc, eq, inArray, isNull, sql, type SQL, type SQLWrapper } from "drizzle-orm";
+import { and, asc, inArray, isNull, sql, type SQL, type SQLWrapper } from "drizzle-orm";
 import { db, type Db, type Tx } from "../index";
-import { ammoniaDoses, projects, stageEvents, waterTests } from "../schema";
+import { ammoniaDoses, projects, waterTests } from "../schema";
 import { getCompanyCycleRules } from "./cycle-state";
 import { approvalMatchesSql, approvalStaleWhySql } from "./load-basis";
 import { queryPrepared } from "./prepared";
@@ -108,10 +108,15 @@ export async function loadCycleInputs(set: ProjectSet, conn: Conn = db()) {
     empty
       ? []
       : conn
-          .selectDistinctOn([stageEvents.projectId], { projectId: stageEvents.projectId, at: stageEvents.at })
-          .from(stageEvents)
-          .where(and(inSet(stageEvents.projectId, set), eq(stageEvents.toStage, "cycling")))
-          .orderBy(stageEvents.projectId, desc(stageEvents.at)),
+          .select({
+            projectId: projects.id,
+            // The recorded start of the current cycle; older projects fall back to their last move into cycling.
+            at: sql<Date | null>`coalesce(${projects.cycleStartedAt}, (select max(se.at) from stage_events se where se.project_id = ${projects.id} and se.to_stage = 'cycling'))`.mapWith(
+              (v: string | Date | null) => (v === null ? null : new Date(v)),
+            ),
+          })
+          .from(projects)
+          .where(inSet(projects.id, set)),
     empty ? [] : conn.select().from(waterTests).where(and(inSet(waterTests.projectId, set), isNull(waterTests.voidedAt))).orderBy(asc(waterTests.takenAt)),
     empty
       ? []
@@ -121,7 +126,7 @@ export async function loadCycleInputs(set: ProjectSet, conn: Conn = db()) {
           .where(and(inSet(ammoniaDoses.projectId, set), isNull(ammoniaDoses.voidedAt)))
           .orderBy(asc(ammoniaDoses.dosedAt)),
   ]);
-  const startBy = new Map(starts.map((s) => [s.projectId, s.at]));
+  const startBy = new Map(starts.filter((s) => s.at).map((s) => [s.projectId, s.at as Date]));
   const readingsBy = new Map<string, WaterTest[]>();
   for (const t of tests) {
     const list = readingsBy.get(t.projectId) ?? [];

@@ -1,10 +1,10 @@
 import "server-only";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, inArray, isNull, like } from "drizzle-orm";
 import { db } from "../index";
 import type { Tx } from "../index";
-import { notes, users } from "../schema";
+import { notes, notices, users } from "../schema";
 import type { ProjectRow } from "./project-access";
-import { companyName, enqueueNotice } from "./outbox";
+import { companyName, enqueueNotice, noticeSendAfter, pendingNotices, withdrawNotices } from "./outbox";
 import { sharedNoteEmail } from "../../lib/mail/shared-note-email";
 import { env } from "../../env";
 
@@ -20,18 +20,22 @@ export async function listNotes(projectId: string, opts: { sharedOnly: boolean }
     .orderBy(asc(notes.createdAt));
 }
 
+/** The e-mail a sharing queued: who it goes to and when it leaves (until then it can be taken back). */
+export type SharedNoteEmail = { to: string; leavesAt: string } | null;
+
 /** Adds a note; a shared one also queues an e-mail to the client, in the same transaction. */
 export async function createNote(opts: { project: ProjectRow; author: { id: string; name: string }; body: string; shared: boolean }) {
   return db().transaction(async (tx) => {
     const [note] = await tx.insert(notes).values({ projectId: opts.project.id, authorId: opts.author.id, body: opts.body, shared: opts.shared }).returning();
-    if (note.shared) await queueSharedNoteNotice(tx, opts.project, opts.author.name, note.body);
-    return note;
+    const email = note.shared ? await queueSharedNoteNotice(tx, opts.project, note.id, opts.author.name, note.body) : null;
+    return { ...note, email };
   });
 }
 
 /**
  * Changes whether a note is shared with the client. Null when the note isn't on this project.
- * Sharing a note that was internal tells the client; un-sharing only hides it again.
+ * Sharing a note that was internal queues an e-mail to the client that waits out the notice delay;
+ * making it internal again hides it and takes that e-mail back if it has not left yet.
  */
 export async function setNoteSharing(opts: { project: ProjectRow; noteId: string; shared: boolean; by: { id: string; name: string } }) {
   return db().transaction(async (tx) => {
@@ -41,19 +45,26 @@ export async function setNoteSharing(opts: { project: ProjectRow; noteId: string
       .where(and(eq(notes.id, opts.noteId), eq(notes.projectId, opts.project.id)))
       .for("update");
     if (!before) return null;
-    if (before.shared === opts.shared) return before;
+    const none = { email: null as SharedNoteEmail, takenBack: false, alreadySent: false };
+    if (before.shared === opts.shared) return { ...before, ...none };
     const [after] = await tx.update(notes).set({ shared: opts.shared }).where(eq(notes.id, before.id)).returning();
     if (after.shared) {
       const [author] = await tx.select({ name: users.name }).from(users).where(eq(users.id, after.authorId));
-      await queueSharedNoteNotice(tx, opts.project, author?.name ?? opts.by.name, after.body);
+      const email = await queueSharedNoteNotice(tx, opts.project, after.id, author?.name ?? opts.by.name, after.body);
+      return { ...after, ...none, email };
     }
-    return after;
+    const pending = await pendingNotices(tx, noteSource(after.id));
+    const takenBack = (await withdrawNotices(tx, pending.map((n) => n.id))) > 0;
+    // Shared before and nothing left to take back: the client was already told.
+    return { ...after, ...none, takenBack, alreadySent: !takenBack };
   });
 }
 
-async function queueSharedNoteNotice(tx: Tx, project: ProjectRow, authorName: string, body: string) {
+const noteSource = (noteId: string) => `note:${noteId}`;
+
+async function queueSharedNoteNotice(tx: Tx, project: ProjectRow, noteId: string, authorName: string, body: string): Promise<SharedNoteEmail> {
   const [client] = await tx.select({ id: users.id, name: users.name, email: users.email }).from(users).where(eq(users.id, project.clientId));
-  if (!client) return;
+  if (!client) return null;
   const email = sharedNoteEmail({
     companyName: await companyName(tx),
     recipientName: client.name,
@@ -62,5 +73,22 @@ async function queueSharedNoteNotice(tx: Tx, project: ProjectRow, authorName: st
     body,
     url: `${env().APP_URL}/projects/${project.id}/talk`,
   });
-  await enqueueNotice(tx, { kind: "shared_note", projectId: project.id, recipientId: client.id, toEmail: client.email, email });
+  const sendAfter = await noticeSendAfter(tx);
+  const id = await enqueueNotice(tx, { kind: "shared_note", projectId: project.id, recipientId: client.id, toEmail: client.email, email, sendAfter, source: noteSource(noteId) });
+  return id ? { to: client.name, leavesAt: sendAfter.toISOString() } : null;
+}
+
+/** Who sees a shared note: the project's client, by name (the team sees every note already). */
+export async function noteAudience(project: ProjectRow): Promise<{ name: string; email: string }[]> {
+  const rows = await db().select({ name: users.name, email: users.email }).from(users).where(eq(users.id, project.clientId));
+  return rows;
+}
+
+/** Shared notes whose e-mail has not left yet, with when it leaves: these can still be taken back. */
+export async function pendingNoteEmails(projectId: string): Promise<Map<string, Date>> {
+  const rows = await db()
+    .select({ source: notices.source, sendAfter: notices.sendAfter })
+    .from(notices)
+    .where(and(eq(notices.projectId, projectId), like(notices.source, "note:%"), inArray(notices.status, ["waiting", "failed"]), isNull(notices.sentAt)));
+  return new Map(rows.map((r) => [r.source!.slice("note:".length), r.sendAfter]));
 }

@@ -4,6 +4,7 @@ import { db } from "../index";
 import { projects, stageEvents } from "../schema";
 import { loadGateFacts } from "./gate-facts";
 import { queueStageChangeNotices } from "./stage-change-notices";
+import { getCycleStartedAt } from "./cycle-state";
 import { issueInstalmentsOnMove } from "./invoices";
 import { checkGate, moveDirection, needsCycleFacts } from "../../lib/stages/gates";
 import { keyForPlacement, type Placement } from "../../lib/stages/ordering";
@@ -17,9 +18,20 @@ export type MoveInput = Placement & {
   version: number;
   reason?: string;
   overrideReason?: string;
+  /** The lead's explicit choice to start the cycle again on a move into cycling. */
+  restartCycle?: boolean;
 };
 
-export type MoveResult = { id: string; stage: Stage; position: string; version: number; stageEnteredAt: string; override: boolean };
+export type MoveResult = {
+  id: string;
+  stage: Stage;
+  position: string;
+  version: number;
+  stageEnteredAt: string;
+  override: boolean;
+  cycleStartedAt: string | null;
+  cycleRestarted: boolean;
+};
 
 // One advisory-lock namespace for board columns; the second key is the column's stage index.
 export const COLUMN_LOCK_SPACE = 7301;
@@ -32,6 +44,12 @@ export const COLUMN_LOCK_SPACE = 7301;
 export async function moveProject(projectId: string, input: MoveInput, user: { id: string; canOverride: boolean }, now = new Date()): Promise<MoveResult> {
   if (input.overrideReason && !user.canOverride) {
     throw forbidden("Only the lead can pass a closed gate. Finish what the gate asks for, or ask the lead.");
+  }
+  if (input.restartCycle && !user.canOverride) {
+    throw forbidden("Only the lead can restart a cycle.");
+  }
+  if (input.restartCycle && input.toStage !== "cycling") {
+    throw badRequest("A cycle can be restarted only on a move into cycling.", { restartCycle: "Move the card into cycling to restart its cycle." });
   }
   if (input.beforeId === projectId || input.afterId === projectId) throw badRequest("A card can't be placed next to itself.", { beforeId: "Choose another card." });
   return db().transaction(async (tx) => {
@@ -78,6 +96,13 @@ export async function moveProject(projectId: string, input: MoveInput, user: { i
     }
 
     const stageChanged = from !== to;
+    // Back into cycling keeps the cycle's start (its readings still count) unless the lead restarts it.
+    let cycleStartedAt: Date | undefined;
+    const restarted = stageChanged && to === "cycling" && !!input.restartCycle;
+    if (stageChanged && to === "cycling") {
+      const kept = restarted ? null : (project.cycleStartedAt ?? (await getCycleStartedAt(projectId, tx)));
+      cycleStartedAt = kept ?? now;
+    }
     const [updated] = await tx
       .update(projects)
       .set({
@@ -87,15 +112,15 @@ export async function moveProject(projectId: string, input: MoveInput, user: { i
         updatedAt: now,
         ...(stageChanged ? { stageEnteredAt: now } : {}),
         // A new cycle gets its own "ready" notice.
-        ...(stageChanged && to === "cycling" ? { cycleReadyNotifiedAt: null } : {}),
+        ...(stageChanged && to === "cycling" ? { cycleReadyNotifiedAt: null, cycleStartedAt } : {}),
       })
       .where(eq(projects.id, projectId))
       .returning();
 
     if (stageChanged) {
       const why = override ? input.overrideReason!.trim() : reason;
-      await tx.insert(stageEvents).values({ projectId, fromStage: from, toStage: to, byUserId: user.id, at: now, reason: why, override, gateReasons });
-      await queueStageChangeNotices(tx, { projectId, fromStage: from, toStage: to, byUserId: user.id, override, reason: why });
+      await tx.insert(stageEvents).values({ projectId, fromStage: from, toStage: to, byUserId: user.id, at: now, reason: why, override, gateReasons, cycleRestarted: restarted });
+      await queueStageChangeNotices(tx, { projectId, fromStage: from, toStage: to, byUserId: user.id, override, reason: why }, now);
       // Install day and handover bill their instalments of the accepted quote, with the move.
       await issueInstalmentsOnMove(tx, { projectId, from, to, now });
     }
@@ -106,6 +131,8 @@ export async function moveProject(projectId: string, input: MoveInput, user: { i
       version: updated.version,
       stageEnteredAt: updated.stageEnteredAt.toISOString(),
       override,
+      cycleStartedAt: updated.cycleStartedAt?.toISOString() ?? null,
+      cycleRestarted: restarted,
     };
   });
 }

@@ -34,6 +34,7 @@ export async function getStageTimeline(projectId: string) {
       reason: stageEvents.reason,
       override: stageEvents.override,
       gateReasons: stageEvents.gateReasons,
+      cycleRestarted: stageEvents.cycleRestarted,
       byName: by.name,
       byRole: by.role,
     })

@@ -100,7 +100,7 @@ async function issueInvitation(
     createdBy: invitedBy,
   });
   const url = `${env().APP_URL}/invitation/${token}`;
-  const email = invitationEmail({ companyName: await companyName(tx), name: user.name, roleLabel: ROLE_LABELS[user.role], url, expiresInDays: INVITATION_DAYS });
+  const email = invitationEmail({ companyName: await companyName(tx), name: user.name, roleLabel: ROLE_LABELS[user.role], role: user.role, url, expiresInDays: INVITATION_DAYS });
   await enqueueNotice(tx, { kind: "invitation", recipientId: user.id, toEmail: user.email, email });
 }
 
@@ -137,3 +137,9 @@ export async function acceptInvitation(token: string, password: string) {
   });
 }
 
+
+/** A person's name and e-mail, or null. */
+export async function getUserContact(userId: string): Promise<{ name: string; email: string } | null> {
+  const [row] = await db().select({ name: users.name, email: users.email }).from(users).where(eq(users.id, userId));
+  return row ?? null;
+}

@@ -5,6 +5,7 @@ import { db } from "../index";
 import { projects, users, visits } from "../schema";
 import { visibleProjectsWhere } from "./project-access";
 import type { SessionUser } from "../../server/session";
+import { notFound } from "../../server/errors";
 import type { visitKinds } from "../schema/visits";
 
 export type VisitKind = (typeof visitKinds)[number];
@@ -31,11 +32,46 @@ export async function nextVisits(projectIds: string[], now = new Date()) {
   return out;
 }
 
+/** The calendar date of an install-day visit, as the project's one target install date. */
+const installDate = (startsAt: Date) => startsAt.toISOString().slice(0, 10);
+
+/**
+ * Books a visit. Booking the install day moves the project's target install date to that day, in
+ * the same transaction, so the calendar carries one install date, not two.
+ */
 export async function addVisit(opts: { projectId: string; kind: VisitKind; startsAt: Date; durationMinutes: number; notes: string | null; by: string }) {
+  return db().transaction(async (tx) => {
+    const [row] = await tx
+      .insert(visits)
+      .values({ projectId: opts.projectId, kind: opts.kind, startsAt: opts.startsAt, durationMinutes: opts.durationMinutes, notes: opts.notes, createdBy: opts.by })
+      .returning();
+    if (row.kind === "install day") await tx.update(projects).set({ targetInstallDate: installDate(row.startsAt), updatedAt: new Date() }).where(eq(projects.id, opts.projectId));
+    return row;
+  });
+}
+
+/** Changes a visit that isn't cancelled; moving the install day moves the target install date with it. */
+export async function updateVisit(opts: { projectId: string; visitId: string; kind: VisitKind; startsAt: Date; durationMinutes: number; notes: string | null }) {
+  return db().transaction(async (tx) => {
+    const [row] = await tx
+      .update(visits)
+      .set({ kind: opts.kind, startsAt: opts.startsAt, durationMinutes: opts.durationMinutes, notes: opts.notes, updatedAt: new Date() })
+      .where(and(eq(visits.id, opts.visitId), eq(visits.projectId, opts.projectId), isNull(visits.cancelledAt)))
+      .returning();
+    if (!row) throw notFound("That visit");
+    if (row.kind === "install day") await tx.update(projects).set({ targetInstallDate: installDate(row.startsAt), updatedAt: new Date() }).where(eq(projects.id, opts.projectId));
+    return row;
+  });
+}
+
+/** Cancels a visit with a reason; it stays on record. The target install date is left as it was. */
+export async function cancelVisit(opts: { projectId: string; visitId: string; by: string; reason: string }, now = new Date()) {
   const [row] = await db()
-    .insert(visits)
-    .values({ projectId: opts.projectId, kind: opts.kind, startsAt: opts.startsAt, durationMinutes: opts.durationMinutes, notes: opts.notes, createdBy: opts.by })
+    .update(visits)
+    .set({ cancelledAt: now, cancelledBy: opts.by, cancelReason: opts.reason })
+    .where(and(eq(visits.id, opts.visitId), eq(visits.projectId, opts.projectId), isNull(visits.cancelledAt)))
     .returning();
+  if (!row) throw notFound("That visit");
   return row;
 }
 

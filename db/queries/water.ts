@@ -35,7 +35,11 @@ function freeNH3(ammonia: number | null, pH: number | null, tempC: number | null
 }
 
 /** Every reading of a project, newest first, with who took it, free NH3, and void details. */
-export async function listWaterTests(projectId: string) {
+/**
+ * A project's water tests, newest first. Clients get `includeVoided: false`: a voided reading and the
+ * lead's reason for it stay with the team (the filter is in the `where`).
+ */
+export async function listWaterTests(projectId: string, opts: { includeVoided: boolean } = { includeVoided: true }) {
   const taker = alias(users, "taker");
   const voider = alias(users, "voider");
   const rows = await db()
@@ -43,7 +47,7 @@ export async function listWaterTests(projectId: string) {
     .from(waterTests)
     .innerJoin(taker, eq(taker.id, waterTests.takenBy))
     .leftJoin(voider, eq(voider.id, waterTests.voidedBy))
-    .where(eq(waterTests.projectId, projectId))
+    .where(opts.includeVoided ? eq(waterTests.projectId, projectId) : and(eq(waterTests.projectId, projectId), isNull(waterTests.voidedAt)))
     .orderBy(desc(waterTests.takenAt), desc(waterTests.createdAt));
   return rows.map(({ test, takenByName, takenByRole, voidedByName }) => ({
     id: test.id,
@@ -58,6 +62,7 @@ export async function listWaterTests(projectId: string) {
     takenBy: { id: test.takenBy, name: takenByName, role: takenByRole },
     freeAmmoniaMgL: test.voidedAt ? null : freeNH3(test.ammoniaMgL, test.pH, test.tempC),
     correctsId: test.correctsId,
+    createdAt: test.createdAt,
     voided: test.voidedAt !== null,
     voidedAt: test.voidedAt,
     voidedByName,
@@ -90,6 +95,12 @@ async function voidOpenTest(tx: Tx, projectId: string, testId: string, voidedBy:
 }
 
 /** Marks a reading as entered in error. It stays on record, with who voided it and why. */
+/** One water test on a project, or null. */
+export async function getWaterTest(projectId: string, testId: string) {
+  const [row] = await db().select().from(waterTests).where(and(eq(waterTests.projectId, projectId), eq(waterTests.id, testId)));
+  return row ?? null;
+}
+
 export async function voidWaterTest(projectId: string, testId: string, voidedBy: string, reason: string, now = new Date()) {
   return db().transaction(async (tx) => {
     await lockProject(tx, projectId);

@@ -25,6 +25,9 @@ export const attachments = pgTable(
       .notNull()
       .references(() => users.id),
     uploadedAt: timestamp("uploaded_at", { withTimezone: true }).notNull().defaultNow(),
+    voidedAt: timestamp("voided_at", { withTimezone: true }),
+    voidedBy: uuid("voided_by").references(() => users.id),
+    voidReason: text("void_reason"),
   },
   (t) => [index("attachments_project_idx").on(t.projectId, t.stage)],
 );

@@ -10,5 +10,9 @@ export const company = pgTable("company", {
   cycleRules: jsonb("cycle_rules").$type<Record<string, unknown>>().notNull().default({}),
   /** The building code floors are screened against (lib/tank/floor-codes). */
   floorCode: text("floor_code").$type<"us-irc" | "en-uk">().notNull().default("us-irc"),
+  /** Expected days per stage that override the defaults in lib/stages/durations. */
+  stageDurations: jsonb("stage_durations").$type<Record<string, unknown>>().notNull().default({}),
+  /** How long a client notice waits in the outbox before it leaves; null uses the deployment's default. */
+  noticeDelaySeconds: integer("notice_delay_seconds"),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });

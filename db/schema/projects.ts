@@ -22,6 +22,8 @@ export const projects = pgTable(
     targetInstallDate: date("target_install_date"),
     targetHandoverDate: date("target_handover_date"),
     tankSummary: text("tank_summary"),
+    /** When the current cycle began: kept when a card returns to cycling, reset only on purpose. */
+    cycleStartedAt: timestamp("cycle_started_at", { withTimezone: true }),
     cycleReadyNotifiedAt: timestamp("cycle_ready_notified_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
@@ -60,6 +62,8 @@ export const stageEvents = pgTable(
     /** True when the lead passed a closed gate; the gate's reasons are kept in gateReasons. */
     override: boolean("override").notNull().default(false),
     gateReasons: jsonb("gate_reasons").$type<string[]>(),
+    /** True when the lead chose to start the cycle again on this move into cycling. */
+    cycleRestarted: boolean("cycle_restarted").notNull().default(false),
   },
   (t) => [index("stage_events_project_idx").on(t.projectId, t.at)],
 );

@@ -1,4 +1,4 @@
-import { boolean, index, integer, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { boolean, index, integer, jsonb, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { projects } from "./projects";
 import { users } from "./users";
 
@@ -52,11 +52,18 @@ export const notices = pgTable(
     subject: text("subject").notNull(),
     text: text("text").notNull(),
     html: text("html").notNull(),
-    status: text("status", { enum: ["waiting", "sent", "failed"] }).notNull().default("waiting"),
+    status: text("status", { enum: ["waiting", "sent", "failed", "withdrawn"] }).notNull().default("waiting"),
+    /** The notice does not leave before this moment, so a change taken back at once reaches nobody. */
+    sendAfter: timestamp("send_after", { withTimezone: true }).notNull().defaultNow(),
+    /** What caused it, e.g. "note:<id>", so taking the change back can find the notice. */
+    source: text("source"),
+    /** Facts the outbox needs later, e.g. the stages of a stage change. */
+    meta: jsonb("meta").$type<Record<string, unknown>>(),
+    withdrawnAt: timestamp("withdrawn_at", { withTimezone: true }),
     attempts: integer("attempts").notNull().default(0),
     lastError: text("last_error"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     sentAt: timestamp("sent_at", { withTimezone: true }),
   },
-  (t) => [index("notices_status_idx").on(t.status, t.createdAt)],
+  (t) => [index("notices_status_idx").on(t.status, t.createdAt), index("notices_source_idx").on(t.source)],
 );

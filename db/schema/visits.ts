@@ -21,6 +21,9 @@ export const visits = pgTable(
       .references(() => users.id),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     cancelledAt: timestamp("cancelled_at", { withTimezone: true }),
+    cancelledBy: uuid("cancelled_by").references(() => users.id),
+    cancelReason: text("cancel_reason"),
+    updatedAt: timestamp("updated_at", { withTimezone: true }),
   },
   (t) => [index("visits_project_idx").on(t.projectId, t.startsAt)],
 );

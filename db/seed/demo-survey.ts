@@ -1,4 +1,7 @@
-import { loadApprovals, siteSurveys, tankDesigns } from "../schema";
+import { and, asc, eq } from "drizzle-orm";
+import { loadApprovals, siteSurveys, stageEvents, tankDesigns } from "../schema";
+import type { Tx } from "../index";
+import type { Stage } from "../../lib/stages/stages";
 import type { FeatureSeed } from "./demo-features";
 import { loadCheck, type StoredDesign } from "../../lib/survey/load-check";
 import type { SiteSurvey } from "../../lib/survey/site-survey.schema";
@@ -8,6 +11,18 @@ import { floorBasis } from "../../lib/survey/floor-basis";
 import { DEFAULT_FLOOR_CODE } from "../../lib/tank/floor-codes";
 
 const DAY = 24 * 3600 * 1000;
+const HOUR = 3600 * 1000;
+
+/** When the project entered `stage`, or null if it never has: the survey's dates are set from its timeline. */
+async function enteredAt(tx: Tx, projectId: string, stage: Stage): Promise<Date | null> {
+  const [row] = await tx
+    .select({ at: stageEvents.at })
+    .from(stageEvents)
+    .where(and(eq(stageEvents.projectId, projectId), eq(stageEvents.toStage, stage)))
+    .orderBy(asc(stageEvents.at))
+    .limit(1);
+  return row?.at ?? null;
+}
 
 type Common = Omit<StoredDesign, "shape" | "lengthMm" | "widthMm" | "heightMm" | "diameterMm" | "bowDepthMm" | "stand"> & { stand: StoredDesign["stand"] };
 
@@ -108,14 +123,17 @@ export const seedDemoSurvey: FeatureSeed = async (tx, { now, projectIds, peopleI
     const problems = validateDesign(design);
     if (problems.length) throw new Error(`Demo design ${key}: ${problems.map((p) => p.message).join(" ")}`);
     const survey = DEMO_SURVEYS[key];
-    const at = new Date(now.getTime() - (20 + n) * DAY);
+    // Surveyed the day before the card went on to the load check; approved the day before aquascape.
+    const loadStage = await enteredAt(tx as Tx, projectId, "stand_load_check");
+    const at = new Date((loadStage?.getTime() ?? now.getTime()) - DAY);
     await tx.insert(siteSurveys).values({ projectId, data: survey as Record<string, unknown>, complete: isSurveyComplete(survey), updatedBy: lead, updatedAt: at });
-    await tx.insert(tankDesigns).values({ projectId, data: design as unknown as Record<string, unknown>, updatedBy: lead, updatedAt: new Date(at.getTime() + DAY) });
+    await tx.insert(tankDesigns).values({ projectId, data: design as unknown as Record<string, unknown>, updatedBy: lead, updatedAt: new Date(at.getTime() + 2 * HOUR) });
     if (!APPROVED.includes(key)) continue;
     const results = loadCheck(design, survey);
     if (!results.glass.ok) throw new Error(`Demo design ${key} has a panel too thin for its water.`);
     const engineer = ENGINEERS[n % ENGINEERS.length];
-    const approvedAt = new Date(at.getTime() + 2 * DAY);
+    const aquascape = await enteredAt(tx as Tx, projectId, "aquascape");
+    const approvedAt = new Date((aquascape?.getTime() ?? now.getTime()) - DAY);
     await tx.insert(loadApprovals).values({
       projectId,
       designSnapshot: design as unknown as Record<string, unknown>,

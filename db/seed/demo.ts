@@ -11,6 +11,9 @@ import { DEMO_FEATURE_SEEDS } from "./demo-features";
 
 const DAY = 24 * 3600 * 1000;
 
+/** Typical days a demo project spent in each stage before moving on (survey, load check, aquascape, fill, cycling, stocking). */
+const DEMO_DAYS_IN_STAGE = [7, 10, 5, 2, 30, 30];
+
 /**
  * Seeds the invented demo scenario into an empty database. Returns false, touching nothing, when
  * any account already exists: real data is never overwritten.
@@ -26,7 +29,8 @@ export async function seedDemo(db: Db, now = new Date()): Promise<boolean> {
     const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 10);
     const people = await tx
       .insert(users)
-      .values(DEMO_PEOPLE.map((p) => ({ name: p.name, email: p.email, role: p.role, phone: p.phone, passwordHash })))
+      // Accounts predate every demo project (the oldest goes back about 250 days).
+      .values(DEMO_PEOPLE.map((p) => ({ name: p.name, email: p.email, role: p.role, phone: p.phone, passwordHash, createdAt: new Date(now.getTime() - 365 * DAY) })))
       .returning({ id: users.id, email: users.email });
     const idOf = (key: string) => people.find((p) => p.email === DEMO_PEOPLE.find((d) => d.key === key)!.email)!.id;
     const leadId = idOf("lead");
@@ -41,6 +45,14 @@ export async function seedDemo(db: Db, now = new Date()): Promise<boolean> {
     for (const p of DEMO_PROJECTS) {
       const stageEnteredAt = new Date(now.getTime() - p.stageDaysAgo * DAY);
       const install = new Date(now.getTime() + p.installInDays * DAY);
+      // The timeline, worked back from when the card entered its stage: one event per stage passed,
+      // each stage taking a typical time, so created dates, events and readings agree.
+      const reached = STAGES.indexOf(p.stage);
+      const eventAt: Date[] = [];
+      eventAt[reached] = stageEnteredAt;
+      for (let i = reached - 1; i >= 0; i--) eventAt[i] = new Date(eventAt[i + 1].getTime() - DEMO_DAYS_IN_STAGE[i] * DAY);
+      const cyclingIndex = STAGES.indexOf("cycling");
+      const cycleStart = reached >= cyclingIndex ? eventAt[cyclingIndex] : null;
       const [row] = await tx
         .insert(projects)
         .values({
@@ -52,47 +64,50 @@ export async function seedDemo(db: Db, now = new Date()): Promise<boolean> {
           stage: p.stage,
           position: positions.get(p.stage)!.shift()!,
           stageEnteredAt,
+          cycleStartedAt: cycleStart,
           targetInstallDate: install.toISOString().slice(0, 10),
           targetHandoverDate: new Date(install.getTime() + 42 * DAY).toISOString().slice(0, 10),
           tankSummary: p.tank,
-          createdAt: new Date(stageEnteredAt.getTime() - 20 * DAY),
+          createdAt: eventAt[0],
+          updatedAt: stageEnteredAt,
         })
         .returning({ id: projects.id });
       projectIds[p.key] = row.id;
       await tx.insert(projectCrew).values(p.crew.map((c) => ({ projectId: row.id, userId: idOf(c) })));
 
-      // A plausible history: one event per stage passed, spaced out before the current stage.
-      const reached = STAGES.indexOf(p.stage);
-      const created = new Date(stageEnteredAt.getTime() - (reached + 1) * 5 * DAY);
-      await tx.insert(stageEvents).values({ projectId: row.id, fromStage: null, toStage: "site_survey", byUserId: leadId, at: created, reason: "Project created" });
+      await tx.insert(stageEvents).values({ projectId: row.id, fromStage: null, toStage: "site_survey", byUserId: leadId, at: eventAt[0], reason: "Project created" });
       for (let i = 1; i <= reached; i++) {
-        const at = i === reached ? stageEnteredAt : new Date(created.getTime() + i * 5 * DAY);
-        await tx.insert(stageEvents).values({ projectId: row.id, fromStage: STAGES[i - 1], toStage: STAGES[i], byUserId: i % 2 ? leadId : idOf(p.crew[0]), at });
+        await tx.insert(stageEvents).values({ projectId: row.id, fromStage: STAGES[i - 1], toStage: STAGES[i], byUserId: i % 2 ? leadId : idOf(p.crew[0]), at: eventAt[i] });
       }
 
       const crewId = idOf(p.crew[0]);
       const clientId = idOf(p.client);
-      if (reached >= STAGES.indexOf("cycling")) {
-        const cycleStart = reached === STAGES.indexOf("cycling") ? stageEnteredAt : new Date(stageEnteredAt.getTime() - 30 * DAY);
-        const days = Math.min(30, Math.floor((now.getTime() - cycleStart.getTime()) / DAY));
-        const series = cycleSeries(days);
+      if (cycleStart) {
+        const cycleEnd = reached > cyclingIndex ? eventAt[cyclingIndex + 1] : now;
+        const days = Math.min(30, Math.floor((cycleEnd.getTime() - cycleStart.getTime()) / DAY));
+        // Tests at 09:00 on their day; never one later than an hour ago, so nothing is dated in the future.
+        const series = cycleSeries(days)
+          .map((r) => ({ r, takenAt: new Date(cycleStart.getTime() + r.day * DAY + 9 * 3600 * 1000) }))
+          .filter(({ takenAt }) => takenAt.getTime() <= Math.min(cycleEnd.getTime(), now.getTime() - 3600 * 1000));
         await tx.insert(waterTests).values(
-          series.map((r, i) => ({
+          series.map(({ r, takenAt }, i) => ({
             projectId: row.id,
-            takenAt: new Date(cycleStart.getTime() + r.day * DAY + 9 * 3600 * 1000),
+            takenAt,
             ammoniaMgL: r.ammonia,
             nitriteMgL: r.nitrite,
             nitrateMgL: r.nitrate,
             pH: r.pH,
             tempC: 25,
             takenBy: i % 3 === 2 ? clientId : crewId,
+            createdAt: takenAt,
           })),
         );
       }
       if (reached >= STAGES.indexOf("first_stocking")) {
         await tx.insert(stockingBatches).values({
           projectId: row.id,
-          addedAt: new Date(stageEnteredAt.getTime() + DAY),
+          // A day after first stocking began (and before in service, whose gate asks for it).
+          addedAt: new Date(eventAt[STAGES.indexOf("first_stocking")].getTime() + DAY),
           description: "First batch: six small schooling fish after two weeks' quarantine",
           fishCount: 6,
           quarantineDays: 14,

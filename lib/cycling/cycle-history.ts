@@ -29,7 +29,7 @@ function compareIds(a: string, b: string): number {
  * Throws RangeError for an invalid time or a negative/non-numeric value:
  * silently skipping one could hide a non-zero result and pass a tank early.
  */
-export function prepareHistory(input: readonly WaterTest[], fromMs?: number): History {
+export function prepareHistory(input: readonly WaterTest[], fromMs?: number, toMs?: number): History {
   const kept: WaterTest[] = [];
   const times: number[] = [];
   let inOrder = true;
@@ -40,6 +40,8 @@ export function prepareHistory(input: readonly WaterTest[], fromMs?: number): Hi
     const t = r.takenAt.getTime();
     if (Number.isNaN(t)) throw new RangeError(`Reading ${r.id} has no valid time.`);
     if (fromMs !== undefined && t < fromMs) continue;
+    // A reading dated after now (beyond clock drift) is a typo or a wrong clock: it never counts as the latest.
+    if (toMs !== undefined && t > toMs) continue;
     for (const key of VALUE_KEYS) {
       const v = r[key];
       if (v != null && !(v >= 0 && v < Infinity)) {

@@ -69,3 +69,26 @@ export function ammoniaDose({
   const mL = mgNH3 / mgPerMl;
   return { mgNH3, mL, drops: mL / ML_PER_DROP };
 }
+
+/** What the dose calculator tells a person: a dose, no dose (and why), or which number to fix. */
+export type DoseAdvice = { kind: "dose"; plan: AmmoniaDosePlan } | { kind: "none"; message: string } | { kind: "fix"; message: string };
+
+const mg = (v: number) => `${Number(v.toFixed(2))} mg/L`;
+
+/**
+ * The calculator's answer from what was typed (numbers may be NaN when a field is empty or not a
+ * number). Each message names the field to fix in words and never shows a raw "NaN".
+ */
+export function doseAdvice(input: { tankVolumeL: number; targetMgL: number; currentMgL: number; sourcePercent: number }): DoseAdvice {
+  const checks: [number, string, (v: number) => boolean][] = [
+    [input.tankVolumeL, "Enter the water volume as a number above 0.", (v) => v > 0 && v <= 1e7],
+    [input.targetMgL, "Enter the target ammonia as a number from 0 to 50 mg/L.", (v) => v > 0 && v <= 50],
+    [input.currentMgL, "Enter the ammonia reading now as a number from 0 to 50 mg/L (0 if none).", (v) => v >= 0 && v <= 50],
+    [input.sourcePercent, "Enter the solution's strength as a percentage above 0 and at most 100.", (v) => v > 0 && v <= 100],
+  ];
+  for (const [value, message, ok] of checks) if (!Number.isFinite(value) || !ok(value)) return { kind: "fix", message };
+  if (input.currentMgL >= input.targetMgL) {
+    return { kind: "none", message: `No dose: ammonia already reads ${mg(input.currentMgL)}, at or above the ${mg(input.targetMgL)} target.` };
+  }
+  return { kind: "dose", plan: ammoniaDose(input) };
+}

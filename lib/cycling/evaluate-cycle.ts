@@ -14,7 +14,7 @@ import {
   showsAmmoniaOrNitrite,
   type History,
 } from "./cycle-history";
-import type { AmmoniaDose, WaterTest } from "./readings";
+import { READING_LIMITS, type AmmoniaDose, type WaterTest } from "./readings";
 import { capitalise, countWord, formatAgo, formatDuration, formatMgL, formatRuleHours, formatRuleSpan } from "./wording";
 
 /** Stable keys for the cycle's phases; show them to people through PHASE_LABELS. */
@@ -188,7 +188,7 @@ export function evaluateCycle(readings: readonly WaterTest[], options: EvaluateC
   const rules = resolveCycleRules(options.rules);
   const fromMs = validTime(options.cycleStartedAt, "The cycle start");
   const nowMs = validTime(options.now, "The current time");
-  const h = prepareHistory(readings, fromMs);
+  const h = prepareHistory(readings, fromMs, nowMs === undefined ? undefined : nowMs + READING_LIMITS.futureToleranceMinutes * 60_000);
   const doseMs = lastDoseTime(options.doses ?? [], fromMs);
   const n = h.readings.length;
   const newestMs = n > 0 ? h.times[n - 1] : undefined;

@@ -1,7 +1,4 @@
-import { stageIndex, type Stage } from "./stages";
-
-/** A card stuck this long in one stage counts as overdue. Our own rule, common practice for install planning. */
-export const STUCK_DAYS = 21;
+import type { Stage } from "./stages";
 
 export type FilterableCard = {
   title: string;
@@ -10,6 +7,8 @@ export type FilterableCard = {
   stage: Stage;
   stageEnteredAt: string;
   targetInstallDate: string | null;
+  /** When the card was expected to leave its stage (lib/stages/durations); null when the stage has no end. */
+  expectedBy: string | null;
   leadId: string | null;
   crew: { id: string }[];
 };
@@ -23,12 +22,12 @@ export function daysSince(iso: string, now: Date): number {
   return Math.max(0, Math.floor((now.getTime() - new Date(iso).getTime()) / DAY));
 }
 
-/** Past its target install date and not yet in service, or stuck in its stage. */
+/**
+ * Late against its own stage only: longer in the stage than the company expects that stage to take.
+ * A target install date already past does not make a cycling tank late.
+ */
 export function isOverdue(card: FilterableCard, now: Date): boolean {
-  if (card.stage === "in_service") return false;
-  const today = now.toISOString().slice(0, 10);
-  if (card.targetInstallDate && card.targetInstallDate < today && stageIndex(card.stage) < stageIndex("in_service")) return true;
-  return daysSince(card.stageEnteredAt, now) >= STUCK_DAYS;
+  return card.expectedBy !== null && now.getTime() > new Date(card.expectedBy).getTime();
 }
 
 export function matchesFilters(card: FilterableCard, f: BoardFilters, now: Date): boolean {

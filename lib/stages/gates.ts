@@ -43,7 +43,7 @@ export function reasonsInto(stage: Stage, facts: GateFacts): string[] {
       return [];
     case "stand_load_check":
       if (!facts.survey) return ["The site survey isn't complete: it hasn't been started yet."];
-      return facts.survey.complete ? [] : ["The site survey isn't complete: finish its required fields and mark it complete."];
+      return facts.survey.complete ? [] : ["The site survey isn't complete: fill in its required fields and save it."];
     case "aquascape": {
       const out: string[] = [];
       if (facts.loadApproval === "stale") out.push(staleApprovalReason(facts.loadApprovalStaleWhy));

@@ -2,6 +2,7 @@ import { eq, sql } from "drizzle-orm";
 import type { Task } from "graphile-worker";
 import { db } from "../../db";
 import { notices } from "../../db/schema";
+import { queueSend } from "../../db/queries/outbox";
 import { mailTransport } from "../mailer";
 import { env } from "../../env";
 
@@ -13,7 +14,12 @@ export const sendNotice: Task = async (payload, helpers) => {
   const { noticeId } = payload as { noticeId: string };
   const failure = await db().transaction(async (tx) => {
     const [row] = await tx.select().from(notices).where(eq(notices.id, noticeId)).for("update");
-    if (!row || row.status === "sent") return null;
+    if (!row || row.status === "sent" || row.status === "withdrawn") return null;
+    // Still held (a job queued without its hold): put it back for when the hold ends.
+    if (row.sendAfter.getTime() > Date.now()) {
+      await queueSend(tx, row.id, row.sendAfter);
+      return null;
+    }
     try {
       await mailTransport().sendMail({ from: env().MAIL_FROM, to: row.toEmail, subject: row.subject, text: row.text, html: row.html });
       await tx

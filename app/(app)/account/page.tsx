@@ -18,7 +18,7 @@ export default async function AccountPage() {
   return (
     <div className="mx-auto flex max-w-2xl flex-col gap-4">
       <h1 className="text-2xl font-bold tracking-tight">Account</h1>
-      <ContactForm initial={{ name: contact?.name ?? user.name, phone: contact?.phone ?? "" }} email={contact?.email ?? user.email} />
+      <ContactForm initial={{ name: contact?.name ?? user.name, phone: contact?.phone ?? "" }} email={contact?.email ?? user.email} isLead={user.role === "lead"} />
       <PrefsForm initial={prefs} kinds={[...kinds]} />
       <CalendarFeed initialUrl={token ? `${env().APP_URL}/api/calendar/${token}.ics` : null} />
     </div>

@@ -4,6 +4,11 @@ import { getCompanyCycleRules } from "@/db/queries/cycle-state";
 import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
 import { listTestKits } from "@/db/queries/test-kits";
 import { CycleRulesForm } from "./_components/cycle-rules-form";
+import { TimingForm } from "./_components/timing-form";
+import { getStageDurationOverrides } from "@/db/queries/stage-durations";
+import { DEFAULT_STAGE_DURATIONS } from "@/lib/stages/durations";
+import { getCompanyNoticeDelay } from "@/db/queries/outbox";
+import { env } from "@/env";
 import { TestKitsPanel } from "./_components/test-kits-panel";
 import { FloorCodeForm } from "./_components/floor-code-form";
 import { getCompanyFloorCode } from "@/db/queries/company-settings";
@@ -13,13 +18,18 @@ export const metadata: Metadata = { title: "Settings" };
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const [overrides, kits, floorCode] = await Promise.all([getCompanyCycleRules(), listTestKits(), getCompanyFloorCode()]);
+  const [overrides, kits, floorCode, durationOverrides, companyDelay] = await Promise.all([getCompanyCycleRules(), listTestKits(), getCompanyFloorCode(), getStageDurationOverrides(), getCompanyNoticeDelay()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
         <h1 className="text-2xl font-bold tracking-tight">Settings</h1>
         <p className="text-sm text-muted">Company-wide rules. Changes apply to every project from the moment they are saved.</p>
       </div>
+      <TimingForm
+        overrides={durationOverrides}
+        defaults={{ ...DEFAULT_STAGE_DURATIONS }}
+        noticeDelay={{ companySeconds: companyDelay, defaultSeconds: env().NOTICE_DELAY_SECONDS }}
+      />
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
       <TestKitsPanel kits={kits} />
       <FloorCodeForm current={floorCode} />

@@ -21,6 +21,11 @@ export const projectCreateSchema = z
     tankSummary: text(200, "Keep the tank summary under 200 characters."),
   })
   .superRefine((v, ctx) => {
+    // The earliest "today" anywhere: a date before it is in the past wherever the lead is.
+    const earliestToday = new Date(Date.now() - 14 * 3_600_000).toISOString().slice(0, 10);
+    if (v.targetInstallDate && v.targetInstallDate < earliestToday) {
+      ctx.addIssue({ code: "custom", path: ["targetInstallDate"], message: "That date is in the past. Choose the day the install is planned for, or leave it empty." });
+    }
     if (v.clientMode === "existing" && !UUID_PATTERN.test(v.clientId)) ctx.addIssue({ code: "custom", path: ["clientId"], message: "Choose the client." });
     if (v.clientMode === "new") {
       if (v.clientName.length < 2) ctx.addIssue({ code: "custom", path: ["clientName"], message: "Enter the client's name." });

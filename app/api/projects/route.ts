@@ -14,5 +14,7 @@ export const GET = userRoute({ roles: ["lead", "crew"] }, async ({ user }) => {
 /** A new project at the end of the site-survey column (lead only). */
 export const POST = userRoute({ roles: ["lead"], schema: projectCreateSchema }, async ({ input, user }) => {
   const project = await createProject(input, user.id);
-  return NextResponse.json({ id: project.id, title: project.title, stage: project.stage, version: project.version }, { status: 201 });
+  // A new client was invited in the same step; the form says so.
+  const invited = input.clientMode === "new" ? { name: input.clientName, email: input.clientEmail } : null;
+  return NextResponse.json({ id: project.id, title: project.title, stage: project.stage, version: project.version, invited }, { status: 201 });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { ammoniaDose, ML_PER_DROP } from "@/lib/cycling/dose";
+import { ammoniaDose, doseAdvice, ML_PER_DROP } from "@/lib/cycling/dose";
 
 // Arithmetic: mass balance (mg/L × L = mg) and % w/w strength (density × 1000 × % / 100 mg per mL).
 
@@ -54,5 +54,32 @@ describe("ammoniaDose worked examples", () => {
       ammoniaDose({ tankVolumeL: 400, targetMgL: 2, sourcePercent: 10, sourceDensityGPerMl: 0 }),
     ).toThrow(RangeError);
     expect(() => ammoniaDose({ tankVolumeL: Number.NaN, targetMgL: 2, sourcePercent: 10 })).toThrow(RangeError);
+  });
+});
+
+describe("doseAdvice", () => {
+  it("says no dose, in words, when ammonia already reads at or above the target", () => {
+    const a = doseAdvice({ tankVolumeL: 400, targetMgL: 2, currentMgL: 2.5, sourcePercent: 10 });
+    expect(a).toEqual({ kind: "none", message: "No dose: ammonia already reads 2.5 mg/L, at or above the 2 mg/L target." });
+    expect(doseAdvice({ tankVolumeL: 400, targetMgL: 2, currentMgL: 2, sourcePercent: 10 }).kind).toBe("none");
+  });
+
+  it("names the field to fix and never shows NaN", () => {
+    for (const input of [
+      { tankVolumeL: Number.NaN, targetMgL: 2, currentMgL: 0, sourcePercent: 10 },
+      { tankVolumeL: 400, targetMgL: Number.NaN, currentMgL: 0, sourcePercent: 10 },
+      { tankVolumeL: 400, targetMgL: 2, currentMgL: Number.NaN, sourcePercent: 10 },
+      { tankVolumeL: 400, targetMgL: 2, currentMgL: 0, sourcePercent: Number.NaN },
+    ]) {
+      const a = doseAdvice(input);
+      expect(a.kind).toBe("fix");
+      expect("message" in a && a.message).not.toMatch(/NaN/);
+    }
+  });
+
+  it("gives the mass-balance dose otherwise", () => {
+    const a = doseAdvice({ tankVolumeL: 400, targetMgL: 2, currentMgL: 0, sourcePercent: 10 });
+    // 2 mg/L × 400 L = 800 mg; 10 % w/w at 1 g/mL is 100 mg/mL, so 8 mL (mass balance, lib/cycling/dose.ts).
+    expect(a.kind === "dose" && a.plan.mL).toBeCloseTo(8, 6);
   });
 });

@@ -219,6 +219,17 @@ describe("evaluateCycle: voided readings, order and custom rules", () => {
     expect(evaluateCycle(shuffled, { now: at(34, 1) }).ready).toBe(true);
   });
 
+  it("never counts a reading dated in the future as the latest", () => {
+    // A typo nine hours ahead of now: the reading at day 30 is still the latest, and it is 25 hours old.
+    const readings = [reading(at(5), { ammoniaMgL: 2 }), zero(at(29)), zero(at(30)), reading(at(31, 10), { ammoniaMgL: 4, nitriteMgL: 1 })];
+    const result = evaluateCycle(readings, { now: at(31, 1) });
+    expect(result.latest?.takenAt).toEqual(at(30));
+    expect(result.ready).toBe(true);
+    // Inside the five-minute clock-drift allowance a reading still counts.
+    const drift = [...readings.slice(0, 3), zero(at(31, 1 + 4 / 60))];
+    expect(evaluateCycle(drift, { now: at(31, 1) }).latest?.takenAt).toEqual(at(31, 1 + 4 / 60));
+  });
+
   it("ignores readings and doses from before cycleStartedAt", () => {
     // A tank restarted on day 39: the earlier cycle's ammonia, nitrate and dose no longer count.
     const readings = [reading(at(0), { ammoniaMgL: 4, nitriteMgL: 2, nitrateMgL: 40 }), zero(at(40), 0), zero(at(41), 0)];

@@ -60,10 +60,13 @@ describe("e-mail layout", () => {
 describe("invitation and cycle-ready e-mails", () => {
   it("an invitation names the company, the role and how long the link lasts", () => {
     const mail = invitationEmail({ companyName: "Invented Reefworks", name: "Ada", roleLabel: "Crew", url: "https://app.invalid/i", expiresInDays: 7 });
-    expect(mail.subject).toBe("Invented Reefworks invited you to Tankwright");
-    expect(mail.text).toContain(
-      "Invented Reefworks added you to Tankwright as crew. Tankwright is where your aquarium project's progress, water tests and photos live.",
-    );
+    // Crew get crew wording: the installs they work on, not "your aquarium project".
+    expect(mail.subject).toBe("Invented Reefworks added you to its install crew on Tankwright");
+    expect(mail.text).toContain("Invented Reefworks added you to Tankwright as crew. Tankwright holds the installs you are assigned to:");
+    expect(mail.text).not.toContain("your aquarium project");
+    const client = invitationEmail({ companyName: "Invented Reefworks", name: "Bo", roleLabel: "Client", role: "client", url: "https://app.invalid/i", expiresInDays: 7 });
+    expect(client.subject).toBe("Invented Reefworks invited you to Tankwright");
+    expect(client.text).toContain("Tankwright is where your aquarium project's progress, water tests and photos live.");
     expect(mail.text).toContain("Choose a password to get started. The link works once and expires in 7 days.");
     expect(mail.text).toContain("Set your password: https://app.invalid/i");
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { STUCK_DAYS, filtersFromQuery, filtersToQuery, isOverdue, matchesFilters, type FilterableCard } from "@/lib/stages/board-filters";
+import { filtersFromQuery, filtersToQuery, isOverdue, matchesFilters, type FilterableCard } from "@/lib/stages/board-filters";
 
 const now = new Date("2026-06-15T10:00:00Z");
 const card: FilterableCard = {
@@ -9,17 +9,18 @@ const card: FilterableCard = {
   stage: "aquascape",
   stageEnteredAt: "2026-06-10T10:00:00Z",
   targetInstallDate: "2026-07-01",
+  expectedBy: "2026-06-17T10:00:00Z",
   leadId: "11111111-1111-4111-8111-111111111111",
   crew: [{ id: "22222222-2222-4222-8222-222222222222" }],
 };
 
 describe("board filters", () => {
-  it("is overdue past the install date before service, or when stuck", () => {
+  it("is late only past its own stage's expected end, whatever the target install date", () => {
     expect(isOverdue(card, now)).toBe(false);
-    expect(isOverdue({ ...card, targetInstallDate: "2026-06-14" }, now)).toBe(true);
-    expect(isOverdue({ ...card, targetInstallDate: "2026-06-14", stage: "in_service" }, now)).toBe(false);
-    const stuck = new Date(now.getTime() - STUCK_DAYS * 86_400_000).toISOString();
-    expect(isOverdue({ ...card, stageEnteredAt: stuck }, now)).toBe(true);
+    expect(isOverdue({ ...card, targetInstallDate: "2026-06-14" }, now)).toBe(false);
+    expect(isOverdue({ ...card, expectedBy: "2026-06-15T09:59:00Z" }, now)).toBe(true);
+    expect(isOverdue({ ...card, expectedBy: null }, now)).toBe(false);
+    expect(matchesFilters({ ...card, expectedBy: "2026-06-01T00:00:00Z" }, { overdue: true }, now)).toBe(true);
   });
 
   it("matches person (lead or crew) and free text over title, client and town", () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { DATE_PATTERN, UUID_PATTERN } from "@/lib/stages/ids";
 import { STAGES, STAGE_BLURBS, STAGE_LABELS, isStage, nextStage, stageIndex } from "@/lib/stages/stages";
-import { daysSince, filtersFromQuery, filtersToQuery, isOverdue, matchesFilters, STUCK_DAYS, type FilterableCard } from "@/lib/stages/board-filters";
+import { daysSince, filtersFromQuery, filtersToQuery, isOverdue, matchesFilters, type FilterableCard } from "@/lib/stages/board-filters";
 import { checkGate, reasonsInto, type GateFacts } from "@/lib/stages/gates";
 import { compareKeys, keyBetween, keyForPlacement, moveInList } from "@/lib/stages/ordering";
 
@@ -20,7 +20,7 @@ describe("gates: every reason in full", () => {
     expect(reasonsInto("site_survey", none)).toEqual([]);
     expect(reasonsInto("stand_load_check", none)).toEqual(["The site survey isn't complete: it hasn't been started yet."]);
     expect(reasonsInto("stand_load_check", { ...none, survey: { complete: false } })).toEqual([
-      "The site survey isn't complete: finish its required fields and mark it complete.",
+      "The site survey isn't complete: fill in its required fields and save it.",
     ]);
     expect(reasonsInto("fill_leak_test", none)).toEqual([
       "The aquascape checklist has no items yet; the lead adds them under Checklists.",
@@ -95,6 +95,7 @@ describe("board filters: edges", () => {
     stage: "aquascape",
     stageEnteredAt: "2026-06-10T10:00:00Z",
     targetInstallDate: null,
+    expectedBy: "2026-06-17T10:00:00Z",
     leadId: null,
     crew: [],
   };
@@ -105,22 +106,20 @@ describe("board filters: edges", () => {
     expect(daysSince("2026-06-16T10:00:00Z", now)).toBe(0);
   });
 
-  it("is overdue from exactly STUCK_DAYS in a stage, not a day before", () => {
-    const entered = (days: number) => new Date(now.getTime() - days * 86_400_000).toISOString();
-    expect(isOverdue({ ...card, stageEnteredAt: entered(STUCK_DAYS) }, now)).toBe(true);
-    expect(isOverdue({ ...card, stageEnteredAt: entered(STUCK_DAYS - 1) }, now)).toBe(false);
-    expect(isOverdue({ ...card, stage: "in_service", stageEnteredAt: entered(STUCK_DAYS + 5) }, now)).toBe(false);
+  it("is late only after its stage's expected end, not at it", () => {
+    expect(isOverdue({ ...card, expectedBy: "2026-06-15T10:00:00Z" }, now)).toBe(false);
+    expect(isOverdue({ ...card, expectedBy: "2026-06-15T09:59:59Z" }, now)).toBe(true);
+    expect(isOverdue({ ...card, stage: "in_service", expectedBy: null }, now)).toBe(false);
   });
 
-  it("an install date of today is not yet overdue; yesterday is", () => {
-    expect(isOverdue({ ...card, targetInstallDate: "2026-06-15" }, now)).toBe(false);
-    expect(isOverdue({ ...card, targetInstallDate: "2026-06-14" }, now)).toBe(true);
-    expect(isOverdue({ ...card, stage: "first_stocking", targetInstallDate: "2026-06-14" }, now)).toBe(true);
+  it("a past install date alone doesn't make a card late", () => {
+    expect(isOverdue({ ...card, targetInstallDate: "2026-06-14" }, now)).toBe(false);
+    expect(isOverdue({ ...card, stage: "first_stocking", targetInstallDate: "2026-06-14" }, now)).toBe(false);
   });
 
   it("with no filters every card matches; an overdue filter keeps overdue cards", () => {
     expect(matchesFilters(card, {}, now)).toBe(true);
-    expect(matchesFilters({ ...card, targetInstallDate: "2026-06-01" }, { overdue: true }, now)).toBe(true);
+    expect(matchesFilters({ ...card, expectedBy: "2026-06-01T00:00:00Z" }, { overdue: true }, now)).toBe(true);
     expect(matchesFilters(card, { q: "   " }, now)).toBe(true);
     expect(matchesFilters(card, { q: "  LOUNGE " }, now)).toBe(true);
     expect(matchesFilters(card, { person: "33333333-3333-4333-8333-333333333333" }, now)).toBe(false);

@@ -9,7 +9,7 @@ import { inputStyles } from "@/components/ui/button-styles";
 import { SubmitRow } from "@/components/ui/submit-row";
 import { contactSchema, type ContactInput } from "@/app/api/me/contact/contact.schema";
 
-export function ContactForm({ initial, email }: { initial: ContactInput; email: string }) {
+export function ContactForm({ initial, email, isLead = false }: { initial: ContactInput; email: string; isLead?: boolean }) {
   const router = useRouter();
   const [status, setStatus] = useState<{ ok: boolean; text: string } | null>(null);
   const { register, handleSubmit, formState, setError } = useForm<ContactInput>({ resolver: zodResolver(contactSchema), defaultValues: initial });
@@ -35,7 +35,10 @@ export function ContactForm({ initial, email }: { initial: ContactInput; email: 
       <Field id="contact-phone" label="Phone (optional)" error={e.phone?.message}>
         <input id="contact-phone" type="tel" className={inputStyles} aria-invalid={!!e.phone} {...register("phone")} />
       </Field>
-      <p className="text-sm text-muted sm:col-span-2">E-mail: {email} (ask the project lead to change it).</p>
+      <p className="text-sm text-muted sm:col-span-2">
+        E-mail: {email}
+        {isLead ? " (your sign-in address; it can't be changed here yet)." : " (ask your project lead to change it)."}
+      </p>
       <SubmitRow busy={formState.isSubmitting} label="Save details" busyLabel="Saving…" status={status} className="sm:col-span-2" />
     </form>
   );

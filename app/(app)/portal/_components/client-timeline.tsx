@@ -29,6 +29,7 @@ function Entry({ entry: e }: { entry: TimelineEntry }) {
   switch (e.kind) {
     case "stage":
       if (!e.fromStage) return <span className="font-medium">{`Project started in ${STAGE_LABELS[e.toStage]}`}</span>;
+      if (e.fromStage === e.toStage) return <span className="font-medium">The cycle started again</span>;
       return (
         <>
           <span className="font-medium">{STAGES.indexOf(e.toStage) < STAGES.indexOf(e.fromStage) ? "Moved back to" : "Moved on to"}</span>

@@ -1,9 +1,10 @@
+import type { ReactNode } from "react";
 import { format } from "date-fns";
 
 type Visit = { id: string; kind: string; startsAt: Date; durationMinutes: number; notes: string | null };
 
-/** Booked visits, soonest first; past ones are dimmed. */
-export function VisitList({ visits, now = new Date() }: { visits: Visit[]; now?: Date }) {
+/** Booked visits, soonest first; past ones are dimmed. `actions` adds the lead's controls under each. */
+export function VisitList({ visits, now = new Date(), actions }: { visits: Visit[]; now?: Date; actions?: (v: Visit) => ReactNode }) {
   if (!visits.length) return <p className="text-sm text-muted">No visits booked yet.</p>;
   return (
     <ul className="flex flex-col gap-2" data-testid="visit-list">
@@ -17,6 +18,7 @@ export function VisitList({ visits, now = new Date() }: { visits: Visit[]; now?:
               {v.durationMinutes >= 120 ? `${Math.round(v.durationMinutes / 60)} hours` : `${v.durationMinutes} minutes`}
             </p>
             {v.notes && <p className="text-muted">{v.notes}</p>}
+            {actions?.(v)}
           </li>
         );
       })}

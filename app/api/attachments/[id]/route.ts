@@ -23,6 +23,8 @@ export const GET = userRoute<undefined, typeof querySchema, { id: string }>({ qu
     if (error instanceof AppError) throw notFound("That file");
     throw error;
   }
+  // A voided photo stays on record for the team only.
+  if (a.voidedAt && user.role === "client") throw notFound("That file");
   const thumb = query.variant === "thumb" && a.thumbKey ? a.thumbKey : null;
   const type = thumb ? "image/webp" : a.contentType;
   const { body, size } = await getObjectStream(thumb ?? a.key);

@@ -10,6 +10,7 @@ export type TimelineEvent = {
   reason: string | null;
   override: boolean;
   gateReasons: string[] | null;
+  cycleRestarted?: boolean;
   byName: string;
 };
 
@@ -23,7 +24,9 @@ export function StageTimeline({ events }: { events: TimelineEvent[] }) {
         return (
           <li key={e.id} className="rounded-lg border border-line bg-card px-3 py-2 text-sm">
             <div className="flex flex-wrap items-center gap-2">
-              {e.fromStage ? (
+              {e.cycleRestarted && e.fromStage === e.toStage ? (
+                <span className="font-medium">Cycle restarted on purpose</span>
+              ) : e.fromStage ? (
                 <>
                   <StageBadge stage={e.fromStage} />
                   <span aria-hidden="true">→</span>
@@ -33,6 +36,9 @@ export function StageTimeline({ events }: { events: TimelineEvent[] }) {
                 <span className="font-medium">Project created in {STAGE_LABELS[e.toStage]}</span>
               )}
               {e.override && <span className="rounded bg-caution-soft px-1.5 py-0.5 text-xs font-semibold text-caution">Gate passed by the lead</span>}
+              {e.cycleRestarted && e.fromStage !== e.toStage && (
+                <span className="rounded bg-caution-soft px-1.5 py-0.5 text-xs font-semibold text-caution">Cycle restarted</span>
+              )}
               {back && <span className="rounded bg-paper px-1.5 py-0.5 text-xs font-semibold text-muted">Moved back</span>}
               <span className="ml-auto text-xs text-muted">
                 {e.byName} · <time dateTime={e.at.toISOString()}>{format(e.at, "d MMM yyyy, HH:mm")}</time>

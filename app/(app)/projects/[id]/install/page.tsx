@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { listChecklistItems, listProjectTicks } from "@/db/queries/checklists";
 import { getDesignData, getUnitSystem, listMaterials } from "@/db/queries/materials";
 import { listLeakChecks } from "@/db/queries/leak-checks";
@@ -15,7 +15,7 @@ import { MaterialsPanel } from "./_components/materials-panel";
 import { FillPanel } from "./_components/fill-panel";
 import type { DayState } from "./_components/checklist-types";
 
-export const metadata: Metadata = { title: "Install day" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Install day");
 
 const DAY_STAGES: Stage[] = ["stand_load_check", "aquascape", "fill_leak_test"];
 
@@ -44,13 +44,13 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
   const dayItems = items.filter((i) => DAY_STAGES.includes(i.stage));
   const initial: Record<string, DayState> = {};
   for (const [itemId, t] of latestTicks(ticks)) {
-    initial[itemId] = { done: t.done, note: t.note, value: t.value, attachmentId: t.attachmentId, byName: t.byName, at: t.at.toISOString() };
+    initial[itemId] = { done: t.done, note: t.note, value: t.value, attachmentId: t.attachmentId, byName: t.byName, mine: t.byUserId === user.id, at: t.at.toISOString() };
   }
   const footprint = bedFootprintFromDesign(design);
   const substrate = design && typeof design.substrate === "object" ? (design.substrate as { type?: string; depthMm?: number }) : null;
 
   return (
-    <div className="mx-auto flex w-full max-w-2xl flex-col gap-8">
+    <div className="mx-auto flex w-full max-w-2xl flex-col gap-8 lg:max-w-none">
       <nav aria-label="On this page" className="flex flex-wrap gap-2 text-sm">
         {[
           ["#stage-stand_load_check", "Stand & load"],
@@ -80,6 +80,7 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
       ) : (
         <EmptyState title="No checklist items yet">The lead adds them on the Checklists page.</EmptyState>
       )}
+      <div className="grid items-start gap-8 lg:grid-cols-2">
       <MaterialsPanel
         projectId={project.id}
         units={units}
@@ -99,6 +100,7 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
         designVolumeL={netVolumeFrom(design)}
         initial={checks.map((c) => ({ ...c, at: c.at.toISOString() }))}
       />
+      </div>
     </div>
   );
 }

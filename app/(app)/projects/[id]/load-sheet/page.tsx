@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { format } from "date-fns";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { getDesign, getLatestApproval, getSurvey, getUnitSystem } from "@/db/queries/survey-design";
 import { loadCheck } from "@/lib/survey/load-check";
 import { getCompanyFloorCode } from "@/db/queries/company-settings";
@@ -16,7 +16,7 @@ import { LoadResults } from "../survey/_components/load-results";
 import { DesignInputs, SurveyInputs } from "./design-inputs";
 import { PrintButton } from "./print-button";
 
-export const metadata: Metadata = { title: "Load-check sheet" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Load-check sheet");
 
 /** A printable record of the load check: inputs, figures, verdicts, sign-off and cautions. */
 export default async function LoadSheetPage({ params }: { params: Promise<{ id: string }> }) {

@@ -1,20 +1,22 @@
 import type { Metadata } from "next";
 import { format } from "date-fns";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
-import { listProjectAttachments } from "@/db/queries/attachments";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
+import { listProjectAttachments, listVoidedPhotos } from "@/db/queries/attachments";
+import { PhotoActions } from "./_components/photo-actions";
 import { STAGE_LABELS, STAGES } from "@/lib/stages/stages";
 import { EmptyState } from "@/components/ui/empty-state";
 import { GalleryUpload } from "./_components/gallery-upload";
 
-export const metadata: Metadata = { title: "Photos" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Photos");
 
 /** The project's photos and documents by stage, for the lead, the assigned crew and the owning client. */
 export default async function PhotosPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requirePageUser();
   const { project } = await requirePageProject(id, user, "view");
-  const files = await listProjectAttachments(project.id);
+  const isStaff = user.role !== "client";
+  const [files, voided] = await Promise.all([listProjectAttachments(project.id), isStaff ? listVoidedPhotos(project.id) : []]);
   const stages = STAGES.filter((s) => files.some((f) => f.stage === s));
   return (
     <div className="flex flex-col gap-6">
@@ -44,12 +46,30 @@ export default async function PhotosPage({ params }: { params: Promise<{ id: str
                     <span className="text-muted">
                       {f.uploadedByName} · <time dateTime={f.uploadedAt.toISOString()}>{format(f.uploadedAt, "d MMM yyyy, HH:mm")}</time>
                     </span>
+                    {(user.role === "lead" || f.uploadedBy === user.id) && (
+                      <PhotoActions projectId={project.id} photoId={f.id} caption={f.caption} canCaption canVoid={user.role === "lead"} />
+                    )}
                   </div>
                 </li>
               ))}
           </ul>
         </section>
       ))}
+      {voided.length > 0 && (
+        <section aria-labelledby="voided-photos" className="flex flex-col gap-2">
+          <h2 id="voided-photos" className="text-sm font-semibold text-muted">
+            Voided photos (the team only)
+          </h2>
+          <ul className="flex flex-col gap-1 text-sm text-muted" data-testid="voided-photos">
+            {voided.map((v) => (
+              <li key={v.id}>
+                {v.caption ?? v.fileName}: voided by {v.byName}
+                {v.voidedAt ? ` on ${format(v.voidedAt, "d MMM yyyy")}` : ""}: {v.voidReason}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
     </div>
   );
 }

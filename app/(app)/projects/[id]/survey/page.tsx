@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { getDesign, getLatestApproval, getSurvey, getUnitSystem } from "@/db/queries/survey-design";
 import { loadCheck } from "@/lib/survey/load-check";
 import { getCompanyFloorCode } from "@/db/queries/company-settings";
@@ -13,7 +13,7 @@ import { SurveyForm } from "./_components/survey-form";
 import { DesignForm } from "./_components/design-form";
 import { ApprovalPanel } from "./_components/approval-panel";
 
-export const metadata: Metadata = { title: "Site & load" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Site & load");
 
 /** The site survey, the tank design with its load check, and the lead's sign-off. */
 export default async function SiteLoadPage({ params }: { params: Promise<{ id: string }> }) {

@@ -1,15 +1,19 @@
 import type { Metadata } from "next";
 import { format } from "date-fns";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { listMessages } from "@/db/queries/messages";
-import { listNotes } from "@/db/queries/notes";
+import { listNotes, noteAudience, pendingNoteEmails } from "@/db/queries/notes";
+import { db } from "@/db";
+import { markMessagesRead } from "@/db/queries/message-reads";
+import { noticeDelaySeconds } from "@/db/queries/outbox";
+import { leavesAtSentence } from "@/lib/mail/notice-delay";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { MessageForm } from "./_components/message-form";
 import { NoteForm } from "./_components/note-form";
 import { ShareToggle } from "./_components/share-toggle";
 
-export const metadata: Metadata = { title: "Messages & notes" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Messages & notes");
 export const dynamic = "force-dynamic";
 
 export default async function TalkPage({ params }: { params: Promise<{ id: string }> }) {
@@ -18,7 +22,16 @@ export default async function TalkPage({ params }: { params: Promise<{ id: strin
   const { project } = await requirePageProject(id, user);
   const isClient = user.role === "client";
   // The filter is in the query's `where`: a client's page never loads an internal note.
-  const [messages, notes] = await Promise.all([listMessages(project.id), listNotes(project.id, { sharedOnly: isClient })]);
+  const isLead = user.role === "lead";
+  // Opening the page reads the messages: the board's and the navigation's unread counts drop.
+  if (!isClient) await markMessagesRead(user.id, project.id);
+  const [messages, notes, audience, pendingEmails, delaySeconds] = await Promise.all([
+    listMessages(project.id),
+    listNotes(project.id, { sharedOnly: isClient }),
+    isLead ? noteAudience(project) : [],
+    isLead ? pendingNoteEmails(project.id) : new Map<string, Date>(),
+    isLead ? noticeDelaySeconds(db()) : 0,
+  ]);
   return (
     <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
       <section aria-labelledby="messages-heading" className="flex flex-col gap-3">
@@ -63,12 +76,21 @@ export default async function TalkPage({ params }: { params: Promise<{ id: strin
                   )}
                 </p>
                 <p className="mt-1 whitespace-pre-wrap">{n.body}</p>
-                {user.role === "lead" && <ShareToggle projectId={project.id} noteId={n.id} shared={n.shared} />}
+                {isLead && (
+                  <ShareToggle
+                    projectId={project.id}
+                    noteId={n.id}
+                    shared={n.shared}
+                    audience={audience}
+                    delaySeconds={delaySeconds}
+                    pendingSentence={n.shared && pendingEmails.has(n.id) ? leavesAtSentence(pendingEmails.get(n.id)!) : null}
+                  />
+                )}
               </li>
             ))}
           </ol>
         )}
-        {user.role === "lead" && <NoteForm projectId={project.id} />}
+        {isLead && <NoteForm projectId={project.id} audience={audience} delaySeconds={delaySeconds} />}
       </section>
     </div>
   );

@@ -1,12 +1,13 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { listVisits } from "@/db/queries/visits";
 import { buttonStyles } from "@/components/ui/button-styles";
 import { VisitList } from "@/app/(app)/portal/_components/visit-list";
 import { VisitForm } from "./_components/visit-form";
+import { VisitActions } from "./_components/visit-actions";
 
-export const metadata: Metadata = { title: "Visits" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Visits");
 export const dynamic = "force-dynamic";
 
 export default async function VisitsPage({ params }: { params: Promise<{ id: string }> }) {
@@ -24,7 +25,14 @@ export default async function VisitsPage({ params }: { params: Promise<{ id: str
           Add to calendar
         </a>
       </div>
-      <VisitList visits={visits} />
+      <VisitList
+        visits={visits}
+        actions={
+          user.role === "lead"
+            ? (v) => <VisitActions projectId={project.id} visit={{ id: v.id, kind: v.kind as never, startsAt: v.startsAt.toISOString(), durationMinutes: v.durationMinutes, notes: v.notes }} />
+            : undefined
+        }
+      />
       {user.role === "lead" && <VisitForm projectId={project.id} />}
     </section>
   );

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
-import { requirePageProject } from "@/server/page-project";
+import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { getCycleEvaluation, getCycleStartedAt } from "@/db/queries/cycle-state";
 import { getDesignVolume, getUnitSystem, listDoses, listWaterTests } from "@/db/queries/water";
 import { listStockingBatches } from "@/db/queries/stocking";
@@ -13,10 +13,13 @@ import { WaterTestForm } from "./_components/water-test-form";
 import { DosePanel } from "./_components/dose-panel";
 import { StockingPanel } from "./_components/stocking-panel";
 import { toReadingView, toDoseView, toBatchView } from "./_components/views";
+import { canUndoOwn, undoDeadline } from "@/lib/install/undo-window";
+import { READING_LIMITS } from "@/lib/cycling/readings";
+import { format } from "date-fns";
 import { KitChoice } from "./_components/kit-choice";
 import { getProjectKits, listTestKits } from "@/db/queries/test-kits";
 
-export const metadata: Metadata = { title: "Water & cycling" };
+export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Water & cycling");
 
 const DAY_MS = 86_400_000;
 
@@ -26,7 +29,7 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
   const { project, relation } = await requirePageProject(id, user);
   const now = new Date();
   const [tests, evaluation, startedAt, unitSystem] = await Promise.all([
-    listWaterTests(project.id),
+    listWaterTests(project.id, { includeVoided: user.role !== "client" }),
     getCycleEvaluation(project.id, now),
     getCycleStartedAt(project.id),
     getUnitSystem(user.id),
@@ -44,8 +47,17 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
     canChooseKits ? listTestKits() : Promise.resolve([]),
   ]);
 
-  const counted = tests.filter((t) => !t.voided).reverse();
-  const chartStart = startedAt ?? (counted[0]?.takenAt ?? now);
+  // The chart shows what the gate counts: this cycle's readings, none dated in the future, on the
+  // same day count as "Day N" above it.
+  const latestAllowed = now.getTime() + READING_LIMITS.futureToleranceMinutes * 60_000;
+  const valid = tests.filter((t) => !t.voided && t.takenAt.getTime() <= latestAllowed).reverse();
+  const chartStart = startedAt ?? valid[0]?.takenAt ?? now;
+  const counted = valid.filter((t) => t.takenAt.getTime() >= chartStart.getTime());
+  const earlier = valid.length - counted.length;
+  const today = evaluation.daysSinceStart ?? Math.max(0, Math.floor((now.getTime() - chartStart.getTime()) / DAY_MS));
+  const takeBack = Object.fromEntries(
+    tests.filter((t) => !t.voided && canUndoOwn({ byUserId: t.takenBy.id, at: t.createdAt }, user.id, now)).map((t) => [t.id, format(undoDeadline(t.createdAt), "HH:mm")]),
+  );
   const points: ChartPoint[] = counted.map((t) => ({
     day: Math.round(((t.takenAt.getTime() - chartStart.getTime()) / DAY_MS) * 10) / 10,
     at: t.takenAt.toISOString(),
@@ -70,11 +82,16 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
           Ammonia, nitrite and nitrate
         </h2>
         {points.length ? (
-          <CycleChart points={points} today={Math.floor((now.getTime() - chartStart.getTime()) / DAY_MS)} />
+          <CycleChart points={points} today={today} />
         ) : (
           <EmptyState title="No water tests yet — log the first one below.">
             The chart fills in as tests are logged: ammonia first, then nitrite, then nitrate as the bacteria establish.
           </EmptyState>
+        )}
+        {earlier > 0 && (
+          <p className="text-xs text-muted">
+            {earlier} {earlier === 1 ? "reading from before this cycle began is" : "readings from before this cycle began are"} in the table below but not on the chart.
+          </p>
         )}
       </section>
 
@@ -82,7 +99,7 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
 
       <WaterTestForm projectId={project.id} unitSystem={unitSystem} kits={kits} />
 
-      <ReadingsTable projectId={project.id} rows={tests.map(toReadingView)} unitSystem={unitSystem} canVoid={canVoid} />
+      <ReadingsTable projectId={project.id} rows={tests.map(toReadingView)} unitSystem={unitSystem} canVoid={canVoid} takeBack={takeBack} />
 
       {(fishStage || batches.length > 0) && (
         <StockingPanel projectId={project.id} batches={batches.map(toBatchView)} canRecord={canStock && fishStage} isLead={user.role === "lead"} />

@@ -33,7 +33,7 @@ export function NewProjectForm({ clients, leads, crew, defaultLeadId }: { client
   const e = formState.errors;
   const onSubmit = handleSubmit(async (values) => {
     setFailure(null);
-    const res = await sendJson<{ id: string }>("/api/projects", "POST", values);
+    const res = await sendJson<{ id: string; invited: { name: string; email: string } | null }>("/api/projects", "POST", values);
     if (!res.ok) {
       for (const [field, message] of Object.entries(res.fields ?? {})) {
         setError((field === "email" ? "clientEmail" : field) as keyof ProjectCreateInput, { message });
@@ -41,7 +41,7 @@ export function NewProjectForm({ clients, leads, crew, defaultLeadId }: { client
       setFailure(res.error);
       return;
     }
-    router.push(`/projects/${res.data.id}`);
+    router.push(`/projects/${res.data.id}${res.data.invited ? "?invited=1" : "?created=1"}`);
   });
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4 rounded-2xl border border-line bg-card p-5 sm:grid-cols-2" aria-label="New project">

@@ -15,6 +15,7 @@ export const moveSchema = z
     version: z.number({ message: "The card's version is missing; reload the board and try again." }).int().min(1),
     reason: text(500, "Keep the reason under 500 characters.").optional(),
     overrideReason: text(500, "Keep the reason under 500 characters.").min(5, "Say in a few words why the gate may be passed.").optional(),
+    restartCycle: z.boolean({ message: "Say yes or no to restarting the cycle." }).optional(),
   })
   .refine((v) => [v.beforeId, v.afterId, v.position].filter((x) => x !== undefined).length <= 1, {
     message: "Give one of beforeId, afterId or position.",

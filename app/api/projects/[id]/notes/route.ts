@@ -11,5 +11,5 @@ export const GET = projectRoute({ action: "view" }, async ({ project, relation }
 
 export const POST = projectRoute({ action: "write_note", schema: noteSchema }, async ({ input, project, user }) => {
   const note = await createNote({ project, author: user, body: input.body, shared: input.shared });
-  return NextResponse.json({ id: note.id, shared: note.shared, body: note.body }, { status: 201 });
+  return NextResponse.json({ id: note.id, shared: note.shared, body: note.body, email: note.email }, { status: 201 });
 });

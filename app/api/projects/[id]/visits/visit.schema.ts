@@ -14,3 +14,7 @@ export const visitSchema = z.object({
 });
 
 export type VisitInput = z.input<typeof visitSchema>;
+
+export const cancelVisitSchema = z.object({
+  reason: z.string({ message: "Say why the visit is cancelled." }).trim().min(3, "Say in a few words why the visit is cancelled.").max(500, "Keep the reason under 500 characters."),
+});

@@ -5,7 +5,7 @@ import { waterTestSchema } from "./water-test.schema";
 import { readingFromInput } from "./reading-input";
 
 /** The project's readings, newest first, voided ones included and marked. */
-export const GET = projectRoute({ action: "view" }, async ({ project }) => NextResponse.json({ tests: await listWaterTests(project.id) }));
+export const GET = projectRoute({ action: "view" }, async ({ project, user }) => NextResponse.json({ tests: await listWaterTests(project.id, { includeVoided: user.role !== "client" }) }));
 
 /** Logs a water test taken by the signed-in person (crew, the lead, or the project's client). */
 export const POST = projectRoute({ action: "log_water_test", schema: waterTestSchema }, async ({ input, project, user }) => {

@@ -23,7 +23,7 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
   const [confirmed, setConfirmed] = useState<Record<string, DayState>>(initial);
 
   const onSaved = useCallback((t: { itemId: string; at: string }, q: QueuedTick) => {
-    const saved: DayState = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, at: t.at, pending: false };
+    const saved: DayState = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, mine: true, at: t.at, pending: false };
     setConfirmed((c) => ({ ...c, [q.itemId]: saved }));
     setStates((s) => (s[q.itemId]?.pending && s[q.itemId]?.at === q.queuedAt ? { ...s, [q.itemId]: saved } : s));
   }, [me.name]);
@@ -46,7 +46,7 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
     setStates((s) => {
       const next = { ...s };
       for (const q of queue) {
-        if (!next[q.itemId]?.pending) next[q.itemId] = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, at: q.queuedAt, pending: true };
+        if (!next[q.itemId]?.pending) next[q.itemId] = { done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, byName: me.name, mine: true, at: q.queuedAt, pending: true };
       }
       return next;
     });
@@ -58,13 +58,14 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
       return rest;
     });
     const q = enqueue({ itemId, ...t });
-    setStates((s) => ({ ...s, [itemId]: { ...t, byName: me.name, at: q.queuedAt, pending: true } }));
+    setStates((s) => ({ ...s, [itemId]: { ...t, byName: me.name, mine: true, at: q.queuedAt, pending: true } }));
   }
 
   return (
-    <div className="flex flex-col gap-6">
+    // Phone first, one column; a desktop uses its width with a column per stage.
+    <div className="grid items-start gap-6 lg:grid-cols-2 2xl:grid-cols-3" data-testid="checklist-columns">
       {queue.length > 0 && (
-        <div role="status" data-testid="pending-ticks" className="sticky top-14 z-20 flex flex-wrap items-center gap-3 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm">
+        <div role="status" data-testid="pending-ticks" className="sticky top-14 z-20 col-span-full flex flex-wrap items-center gap-3 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm">
           <span className="font-semibold text-caution">{pendingLabel(queue.length)}</span>
           <span className="text-ink/80">{lastError ?? "Sending…"}</span>
           <button type="button" onClick={retryNow} className={`${buttonStyles.secondary} ml-auto min-h-11`}>

@@ -6,6 +6,7 @@ import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
 import { UploadButton, type UploadedFile } from "@/components/ui/upload-button";
 import { ItemHistory } from "./item-history";
 import type { DayItem, DayState } from "./checklist-types";
+import { UNDO_WINDOW_MINUTES, canUndoOwn, undoDeadline } from "@/lib/install/undo-window";
 
 type Submit = (t: { done: boolean; note: string | null; value: number | null; attachmentId: string | null }) => void;
 
@@ -116,6 +117,16 @@ export function ChecklistItemRow({ projectId, item, state, refusal, isLead, onSu
 
       {state && (
         <div className="mt-2 flex flex-wrap gap-2">
+          {done && !isLead && state.mine && !state.pending && canUndoOwn({ byUserId: "me", at: state.at }, "me", new Date()) && (
+            <button
+              type="button"
+              className={`${buttonStyles.secondary} min-h-11`}
+              title={`Your own tick can be undone for ${UNDO_WINDOW_MINUTES} minutes`}
+              onClick={() => onSubmit({ done: false, note: "Undone: ticked by mistake", value: null, attachmentId: null })}
+            >
+              Undo my tick (until {format(undoDeadline(state.at), "HH:mm")})
+            </button>
+          )}
           {done && isLead && !state.pending && !unticking && (
             <button type="button" className={`${buttonStyles.secondary} min-h-11`} onClick={() => setUnticking(true)}>
               Untick…

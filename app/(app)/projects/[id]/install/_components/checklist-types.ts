@@ -10,6 +10,8 @@ export type DayState = {
   value: number | null;
   attachmentId: string | null;
   byName: string;
+  /** Made by the person looking: they may undo it within the undo window. */
+  mine?: boolean;
   at: string;
   pending?: boolean;
 };

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { ammoniaDose } from "@/lib/cycling/dose";
+import { doseAdvice } from "@/lib/cycling/dose";
 import { fromDisplay, toDisplay, unitLabel } from "@/lib/tank/units";
 import { Field } from "@/components/ui/field";
 import { inputStyles, buttonStyles } from "@/components/ui/button-styles";
@@ -22,16 +22,11 @@ export function DoseCalculator({ designVolume, unitSystem, onUse }: { designVolu
   const [current, setCurrent] = useState("0");
   const [strength, setStrength] = useState("10");
 
-  let plan: ReturnType<typeof ammoniaDose> | null = null;
-  let problem: string | null = null;
   const litres = fromDisplay("volume", num(volume), unitSystem);
-  if (volume.trim() !== "") {
-    try {
-      plan = ammoniaDose({ tankVolumeL: litres, targetMgL: num(target), currentMgL: current.trim() === "" ? 0 : num(current), sourcePercent: num(strength) });
-    } catch (error) {
-      problem = error instanceof RangeError ? error.message : "Check the numbers.";
-    }
-  }
+  const advice =
+    volume.trim() === "" ? null : doseAdvice({ tankVolumeL: litres, targetMgL: num(target), currentMgL: current.trim() === "" ? 0 : num(current), sourcePercent: num(strength) });
+  const plan = advice?.kind === "dose" ? advice.plan : null;
+  const problem = advice?.kind === "fix" ? advice.message : null;
 
   return (
     <div className="flex flex-col gap-3" aria-labelledby="calc-heading">
@@ -59,6 +54,8 @@ export function DoseCalculator({ designVolume, unitSystem, onUse }: { designVolu
       <div role="status" aria-live="polite" className="text-sm" data-testid="dose-result">
         {problem ? (
           <p className="text-danger">{problem}</p>
+        ) : advice?.kind === "none" ? (
+          <p className="font-medium">{advice.message}</p>
         ) : plan ? (
           <p>
             Add <strong className="num">{plan.mL < 10 ? plan.mL.toFixed(1) : Math.round(plan.mL)} mL</strong>

@@ -6,14 +6,29 @@ import { buttonStyles } from "@/components/ui/button-styles";
 import { formatReading, type ReadingView } from "./views";
 import { VoidButton } from "./void-button";
 import { WaterTestForm } from "./water-test-form";
+import { TakeBackButton } from "./take-back-button";
 
 const roughly = (v: number) => String(Number(v.toPrecision(2)));
 
 /** Every reading, newest first, in plain numbers; voided ones stay visible, struck through, with why. */
-export function ReadingsTable({ projectId, rows, unitSystem, canVoid }: { projectId: string; rows: ReadingView[]; unitSystem: "metric" | "imperial"; canVoid: boolean }) {
+export function ReadingsTable({
+  projectId,
+  rows,
+  unitSystem,
+  canVoid,
+  takeBack = {},
+}: {
+  projectId: string;
+  rows: ReadingView[];
+  unitSystem: "metric" | "imperial";
+  canVoid: boolean;
+  /** The viewer's own readings still inside the undo window, with the time the window ends ("10:42"). */
+  takeBack?: Record<string, string>;
+}) {
   const [fixing, setFixing] = useState<string | null>(null);
   const tempUnit = unitLabel("temperature", unitSystem);
-  const cols = canVoid ? 11 : 10;
+  const actions = canVoid || Object.keys(takeBack).length > 0;
+  const cols = actions ? 11 : 10;
   return (
     <section aria-labelledby="readings-heading" className="flex flex-col gap-3">
       <h2 id="readings-heading" className="text-lg font-semibold">
@@ -40,7 +55,7 @@ export function ReadingsTable({ projectId, rows, unitSystem, canVoid }: { projec
                   Free NH3 mg/L
                 </th>
                 <th className="px-3 py-2">Notes</th>
-                {canVoid && <th className="px-3 py-2"><span className="sr-only">Actions</span></th>}
+                {actions && <th className="px-3 py-2"><span className="sr-only">Actions</span></th>}
               </tr>
             </thead>
             <tbody>
@@ -71,9 +86,12 @@ export function ReadingsTable({ projectId, rows, unitSystem, canVoid }: { projec
                         </span>
                       )}
                     </td>
-                    {canVoid && (
+                    {actions && (
                       <td className="px-3 py-2 align-top">
-                        {!r.voided && (
+                        {!r.voided && !canVoid && takeBack[r.id] && (
+                          <TakeBackButton url={`/api/projects/${projectId}/water-tests/${r.id}/take-back`} until={takeBack[r.id]} />
+                        )}
+                        {!r.voided && canVoid && (
                           <div className="flex flex-col items-start gap-1">
                             <button type="button" className={buttonStyles.quiet} onClick={() => setFixing(fixing === r.id ? null : r.id)} aria-expanded={fixing === r.id}>
                               Correct

@@ -10,6 +10,6 @@ export const PATCH = projectRoute<typeof noteSharingSchema, undefined, { id: str
   async ({ input, project, user, params }) => {
     const note = await setNoteSharing({ project, noteId: parseId(params.noteId, "That note"), shared: input.shared, by: user });
     if (!note) throw notFound("That note");
-    return NextResponse.json({ id: note.id, shared: note.shared });
+    return NextResponse.json({ id: note.id, shared: note.shared, email: note.email, takenBack: note.takenBack, alreadySent: note.alreadySent });
   },
 );
