@@ -32,6 +32,17 @@ describe("freshWaterDensity (Tanaka et al. 2001)", () => {
     expect(freshWaterDensity(3.983035)).toBeGreaterThan(freshWaterDensity(5));
   });
 
+  it("worked by hand from Tanaka et al. (2001) eq. (1) at 40 °C, where every coefficient shows", () => {
+    // a5 · (1 − (40 − 3.983035)² · (40 + 301.797) / (522528.9 · (40 + 69.34881)))
+    //   = 999.97495 · (1 − 1297.22177 · 341.797 / 57137913.41) = 999.97495 · (1 − 0.00775994) = 992.215209 kg/m³
+    expect(freshWaterDensity(40)).toBeCloseTo(992.215209, 6);
+  });
+
+  it("peaks at 3.983035 °C to the fourth decimal place (Tanaka 2001, eq. (1): a1 = −3.983035 °C)", () => {
+    expect(freshWaterDensity(3.983035)).toBeGreaterThan(freshWaterDensity(3.983035 + 1e-4));
+    expect(freshWaterDensity(3.983035)).toBeGreaterThan(freshWaterDensity(3.983035 - 1e-4));
+  });
+
   it("falls steadily across aquarium temperatures (property)", () => {
     fc.assert(
       fc.property(fc.double({ min: 4, max: 39, noNaN: true }), (t) => {
@@ -49,6 +60,13 @@ describe("seawaterDensity (EOS-80, Millero & Poisson 1981)", () => {
   it("reproduces the UNESCO check value at S = 35, t = 25 °C", () => {
     // Fofonoff & Millard (1983), UNESCO Technical Papers in Marine Science 44: ρ(35, 25, 0) = 1023.343 kg/m³
     expect(seawaterDensity(at68(25), 35)).toBeCloseTo(1023.343, 3);
+  });
+
+  it("worked by hand from the EOS-80 coefficients at S = 40, t68 = 40 °C, where every coefficient shows", () => {
+    // Millero & Poisson (1981) polynomial, evaluated by hand from its printed coefficients:
+    // ρw = 992.2204027, A = 0.74421092, B = −0.00428122, C = 4.8314e-4
+    // ρ = 992.2204027 + 0.74421092 · 40 − 0.00428122 · 40^1.5 + 4.8314e-4 · 40² = 1021.678791 kg/m³
+    expect(seawaterDensity(at68(40), 40)).toBeCloseTo(1021.678791, 6);
   });
 
   it("reproduces the other one-atmosphere check values", () => {

@@ -1,0 +1,19 @@
+import { fileURLToPath } from "node:url";
+import { defineConfig } from "vitest/config";
+
+// The unit tests alone, for the mutation run: Stryker's vitest runner starts one config, and the
+// integration project would need the database and the app.
+export default defineConfig({
+  resolve: {
+    alias: {
+      "@": fileURLToPath(new URL(".", import.meta.url)),
+      "server-only": fileURLToPath(new URL("./tests/support/empty.ts", import.meta.url)),
+    },
+  },
+  test: {
+    include: ["tests/unit/**/*.test.ts"],
+    // These check the app's route files and server wiring, not lib/; they import the whole server.
+    exclude: ["tests/unit/server/**"],
+    environment: "node",
+  },
+});
