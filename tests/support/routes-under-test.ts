@@ -106,6 +106,7 @@ export const SAMPLE_BODIES: Record<string, unknown> = {
   "PUT /api/projects/[id]/schedule": { depositBp: 3000, progressBp: 4000, monthlyPlanMinor: null, monthlyPlanTaxBp: 2000 },
   "PUT /api/projects/[id]/test-kits": { analyte: "ammonia", kitId: null },
   "POST /api/settings/test-kits": { name: "Kit A", analyte: "ammonia", basis: "compound", steps: "0, 0.5, 1" },
+  "PUT /api/settings/floor-code": { floorCode: "en-uk" },
 };
 
 export const keyOf = (h: Handler) => `${h.method} ${h.path}`;
