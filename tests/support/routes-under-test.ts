@@ -95,6 +95,18 @@ export const SAMPLE_BODIES: Record<string, unknown> = {
   "POST /api/projects/[id]/water-tests/[testId]/void": { reason: "entered twice" },
   "POST /api/projects/[id]/water-tests": { takenAt: NOW_ISH, ammoniaMgL: 0 },
   "PUT /api/settings/cycle-rules": { stallDays: 10 },
+  "POST /api/invoices/[invoiceId]/transfer": { amountMinor: 1000, receivedOn: "2026-11-30", reference: "BANK-REF-1" },
+  "POST /api/money/monthly": { period: "2026-11" },
+  "PUT /api/money/settings": { currency: "EUR", depositBp: 3000, progressBp: 4000, defaultTaxBp: 2000, paymentTermsDays: 14 },
+  "POST /api/price-list": { group: "tank_glass", label: "Glass panel", unit: "each", unitPriceMinor: 1000, taxBp: 2000, basis: "manual" },
+  "PATCH /api/price-list/[itemId]": { label: "Glass panel" },
+  "POST /api/projects/[id]/quotes": { from: "design" },
+  "PUT /api/projects/[id]/quotes/[quoteId]": { lines: [], notes: "" },
+  "POST /api/projects/[id]/quotes/[quoteId]/accept": { typedName: "Pat Sample", seenHash: "a".repeat(64) },
+  "PUT /api/projects/[id]/schedule": { depositBp: 3000, progressBp: 4000, monthlyPlanMinor: null, monthlyPlanTaxBp: 2000 },
+  "PUT /api/projects/[id]/test-kits": { analyte: "ammonia", kitId: null },
+  "POST /api/settings/test-kits": { name: "Kit A", analyte: "ammonia", basis: "compound", steps: "0, 0.5, 1" },
+  "PUT /api/settings/floor-code": { floorCode: "en-uk" },
 };
 
 export const keyOf = (h: Handler) => `${h.method} ${h.path}`;

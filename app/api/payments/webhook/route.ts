@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import type Stripe from "stripe";
 import { publicRoute } from "@/server/route";
 import { badRequest } from "@/server/errors";
+import { JSON_BODY_LIMIT, readLimitedBody } from "@/server/body";
 import { verifyWebhook } from "@/server/payments";
 import { processPaymentEvent } from "@/db/queries/payments";
 
@@ -12,7 +13,8 @@ import { processPaymentEvent } from "@/db/queries/payments";
 export const POST = publicRoute({}, async ({ req }) => {
   const signature = req.headers.get("stripe-signature");
   if (!signature) throw badRequest("The webhook's signature header is missing; nothing was changed.");
-  const raw = await req.text();
+  // Read within the same limit as any JSON body, so a huge or endless body is a 413, not memory.
+  const raw = new TextDecoder().decode(await readLimitedBody(req, JSON_BODY_LIMIT));
   let event: Stripe.Event;
   try {
     event = verifyWebhook(raw, signature);
