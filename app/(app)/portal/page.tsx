@@ -16,7 +16,7 @@ import { PayButton } from "@/components/money/pay-button";
 import { formatMoney } from "@/lib/money/amounts";
 import { INVOICE_KIND_LABELS } from "@/lib/money/schedule";
 
-export const metadata: Metadata = { title: "My projects" };
+export const metadata: Metadata = { title: "Your tanks" };
 export const dynamic = "force-dynamic";
 
 export default async function PortalPage() {

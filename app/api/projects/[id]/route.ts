@@ -3,7 +3,7 @@ import { projectRoute } from "@/server/route";
 import { getProjectDetail, updateProjectDetails } from "@/db/queries/project-create";
 import { projectDetailsSchema } from "./project-details.schema";
 
-/** One card's details for the board (lead and assigned crew; a client is sent to My projects). */
+/** One card's details for the board (lead and assigned crew; a client is sent to Your tanks). */
 export const GET = projectRoute({ action: "view_internal" }, async ({ project }) => NextResponse.json(await getProjectDetail(project.id)));
 
 /** Changes a project's details (lead only), guarded by the card's version. */
