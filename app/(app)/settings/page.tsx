@@ -5,13 +5,15 @@ import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
 import { listTestKits } from "@/db/queries/test-kits";
 import { CycleRulesForm } from "./_components/cycle-rules-form";
 import { TestKitsPanel } from "./_components/test-kits-panel";
+import { FloorCodeForm } from "./_components/floor-code-form";
+import { getCompanyFloorCode } from "@/db/queries/company-settings";
 
 export const metadata: Metadata = { title: "Settings" };
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const [overrides, kits] = await Promise.all([getCompanyCycleRules(), listTestKits()]);
+  const [overrides, kits, floorCode] = await Promise.all([getCompanyCycleRules(), listTestKits(), getCompanyFloorCode()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -20,6 +22,7 @@ export default async function SettingsPage() {
       </div>
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
       <TestKitsPanel kits={kits} />
+      <FloorCodeForm current={floorCode} />
     </div>
   );
 }
