@@ -1,5 +1,7 @@
 import { expect, test } from "@playwright/test";
-import { closeDb } from "@/db";
+import { eq } from "drizzle-orm";
+import { closeDb, db } from "@/db";
+import { quoteAcceptances } from "@/db/schema";
 import { makeTeam, PASSWORD } from "../support/fixtures";
 import { approveLoad } from "../integration/board-support";
 import { issuedQuote } from "../integration/money-support";
@@ -12,6 +14,8 @@ test.afterAll(async () => {
 });
 
 test("the client accepts the quote and pays the deposit on the payment page; the lead sees the gate open", async ({ page, browser }) => {
+  // Two sign-ins, six page loads and the payment service's own page: more than one page's allowance.
+  test.setTimeout(180_000);
   const t = await makeTeam("stand_load_check");
   await approveLoad(t.project, t.lead);
   await issuedQuote(t.project, t.lead);
@@ -33,6 +37,9 @@ test("the client accepts the quote and pays the deposit on the payment page; the
   await expect(page.getByTestId("quote-total")).toHaveText("1,200.00 GBP");
   await money.accept(t.client.name);
   await expect(money.invoice("deposit")).toContainText("600.00 GBP");
+  const [acceptance] = await db().select().from(quoteAcceptances).where(eq(quoteAcceptances.projectId, t.project.id));
+  expect(acceptance.typedName).toBe(t.client.name);
+  expect(acceptance.ipAddress).toMatch(/127\.0\.0\.1/);
 
   await board.open();
   await expect(board.card(t.project.title).getByTestId("next-needs")).toHaveText("Before Aquascape: The deposit isn't paid yet: glass is ordered and install day booked once it is.");

@@ -103,7 +103,7 @@ describe("quotes", () => {
     const ok = await accept(client, v1.id, { typedName: `  ${t.client.name.toUpperCase()} `, seenHash: seen.hash });
     expect(ok.status).toBe(201);
     const [stored] = await db().select().from(quoteAcceptances).where(eq(quoteAcceptances.projectId, t.project.id));
-    expect(stored).toMatchObject({ quoteId: v1.id, acceptedBy: t.client.id, ipAddress: "203.0.113.7", contentHash: seen.hash, totalMinor: 91_200 });
+    expect(stored).toMatchObject({ quoteId: v1.id, acceptedBy: t.client.id, ipAddress: "203.0.113.7, 10.0.0.1", contentHash: seen.hash, totalMinor: 91_200 });
     expect(Date.now() - stored.acceptedAt.getTime()).toBeLessThan(60_000);
     // 8 × 95.00 + 20 % = 912.00; the company default deposit is 50 %: 456.00.
     const [deposit] = await invoicesOf(t.project);

@@ -5,11 +5,13 @@ import { acceptQuoteSchema } from "../../quote.schema";
 
 type Params = { id: string; quoteId: string };
 
-/** The first address a proxy saw, else the direct peer's, as the client's address. */
+/**
+ * Where the acceptance came from: the whole forwarding chain as received (Next fills in the peer's
+ * address when no proxy set one), since which entry is trustworthy depends on the proxies in front.
+ */
 function clientAddress(req: Request): string | null {
-  const fwd = req.headers.get("x-forwarded-for");
-  if (fwd) return fwd.split(",")[0].trim().slice(0, 100);
-  return req.headers.get("x-real-ip")?.slice(0, 100) ?? null;
+  const chain = req.headers.get("x-forwarded-for") ?? req.headers.get("x-real-ip");
+  return chain ? chain.trim().slice(0, 300) : null;
 }
 
 /** The client accepts the current quote by typing their name; the deposit invoice follows. */
