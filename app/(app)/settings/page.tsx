@@ -2,16 +2,18 @@ import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
 import { getCompanyCycleRules } from "@/db/queries/cycle-state";
 import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
+import { listTestKits } from "@/db/queries/test-kits";
 import { CycleRulesForm } from "./_components/cycle-rules-form";
 import { FloorCodeForm } from "./_components/floor-code-form";
 import { getCompanyFloorCode } from "@/db/queries/company-settings";
+import { TestKitsPanel } from "./_components/test-kits-panel";
 
 export const metadata: Metadata = { title: "Settings" };
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const [overrides, floorCode] = await Promise.all([getCompanyCycleRules(), getCompanyFloorCode()]);
+  const [overrides, kits, floorCode] = await Promise.all([getCompanyCycleRules(), listTestKits(), getCompanyFloorCode()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -20,6 +22,7 @@ export default async function SettingsPage() {
       </div>
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
       <FloorCodeForm current={floorCode} />
+      <TestKitsPanel kits={kits} />
     </div>
   );
 }
