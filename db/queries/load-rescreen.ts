@@ -8,6 +8,9 @@ import { loadCheck, type LoadCheckResults, type StoredDesign } from "../../lib/s
 import { floorBasis } from "../../lib/survey/floor-basis";
 import type { SiteSurvey } from "../../lib/survey/site-survey.schema";
 import { rescreenVerdict } from "../../lib/survey/rescreen";
+import { validateDesign } from "../../lib/tank/design";
+
+const UNREADABLE = "The approved design can't be screened under the current rules; approve it again.";
 
 /**
  * Re-screens every standing approval recorded under earlier glass and floor rules. One whose glass
@@ -27,8 +30,16 @@ export async function rescreenOldApprovals(): Promise<{ checked: number; stale: 
   for (const row of rows) {
     const survey = (row.survey ?? {}) as Partial<SiteSurvey>;
     // Re-screen the design the approval holds: a later design change already makes it stale.
-    const now = loadCheck(row.snapshot as unknown as StoredDesign, survey, code);
-    const reason = rescreenVerdict(row.results as unknown as LoadCheckResults, now);
+    const design = row.snapshot as unknown as StoredDesign;
+    let reason: string | null;
+    try {
+      reason = validateDesign(design).length
+        ? UNREADABLE
+        : rescreenVerdict(row.results as unknown as LoadCheckResults, loadCheck(design, survey, code));
+    } catch {
+      // A snapshot from an older shape of the design can't be screened now: don't let it stand.
+      reason = UNREADABLE;
+    }
     if (reason) stale++;
     await db()
       .update(loadApprovals)
