@@ -9,3 +9,4 @@ export * from "./schema/water";
 export * from "./schema/talk";
 export * from "./schema/visits";
 export * from "./schema/test-kits";
+export * from "./schema/money";
