@@ -8,5 +8,7 @@ export const company = pgTable("company", {
   phone: text("phone"),
   /** Partial cycle rules that override the defaults in lib/cycling. */
   cycleRules: jsonb("cycle_rules").$type<Record<string, unknown>>().notNull().default({}),
+  /** Days a new batch of fish spends in a holding tank before the display. */
+  quarantineDays: integer("quarantine_days").notNull().default(28),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });

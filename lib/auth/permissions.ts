@@ -19,13 +19,19 @@ export type ProjectAction =
   | "upload_photo"
   | "write_note"
   | "send_message"
-  | "edit_details";
+  | "edit_details"
+  | "view_stocking_plan"
+  | "edit_stocking_plan"
+  | "record_quarantine"
+  | "override_quarantine"
+  | "view_livestock"
+  | "record_livestock";
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
 // Everything not listed for crew or clients is the lead's alone.
-const CREW: ProjectAction[] = ["view", "move", "edit_survey", "tick_checklist", "log_water_test", "log_dose", "record_stocking", "upload_photo", "send_message"];
-const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message"];
+const CREW: ProjectAction[] = ["view", "move", "edit_survey", "tick_checklist", "log_water_test", "log_dose", "record_stocking", "upload_photo", "send_message", "view_stocking_plan", "record_quarantine", "view_livestock", "record_livestock"];
+const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message", "view_livestock"];
 
 /** True when the caller can see the project at all (else it answers 404, not 403). */
 export function canSeeProject(rel: Relation): boolean {

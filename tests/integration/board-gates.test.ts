@@ -96,7 +96,7 @@ describe("the gates between stages", () => {
     const s = await signedIn(t.crew);
     let res = await move(s, t.project.id, "in_service");
     expect(res.status).toBe(422);
-    expect(res.json.reasons[0]).toContain("No fish have been recorded");
+    expect(res.json.reasons[0]).toContain("There is no stocking plan yet");
     await recordStocking(t.project, t.crew);
     res = await move(s, t.project.id, "in_service");
     expect(res.status).toBe(200);
