@@ -7,7 +7,7 @@ export function navItemsFor(role: Role, devTools: boolean): NavItem[] {
   if (role === "client") return [{ href: "/portal", label: "My projects" }, { href: "/account", label: "Account" }];
   const items: NavItem[] = [{ href: "/board", label: "Board" }];
   if (role === "lead") {
-    items.push({ href: "/people", label: "People" }, { href: "/checklists", label: "Checklists" }, { href: "/settings", label: "Settings" }, { href: "/outbox", label: "Outbox" });
+    items.push({ href: "/people", label: "People" }, { href: "/checklists", label: "Checklists" }, { href: "/species", label: "Species" }, { href: "/holding-tanks", label: "Holding tanks" }, { href: "/settings", label: "Settings" }, { href: "/outbox", label: "Outbox" });
     if (devTools) items.push({ href: "/dev/mail", label: "Caught mail" });
   }
   items.push({ href: "/account", label: "Account" });

@@ -3,13 +3,16 @@ import { requirePageUser } from "@/server/session";
 import { getCompanyCycleRules } from "@/db/queries/cycle-state";
 import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
 import { CycleRulesForm } from "./_components/cycle-rules-form";
+import { QuarantineForm } from "./_components/quarantine-form";
+import { getQuarantineDays } from "@/db/queries/holding-tanks";
+import { DEFAULT_QUARANTINE_DAYS } from "@/lib/stocking/quarantine";
 
 export const metadata: Metadata = { title: "Settings" };
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const overrides = await getCompanyCycleRules();
+  const [overrides, quarantineDays] = await Promise.all([getCompanyCycleRules(), getQuarantineDays()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -17,6 +20,7 @@ export default async function SettingsPage() {
         <p className="text-sm text-muted">Company-wide rules. Changes apply to every project from the moment they are saved.</p>
       </div>
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
+      <QuarantineForm days={quarantineDays} defaultDays={DEFAULT_QUARANTINE_DAYS} />
     </div>
   );
 }
