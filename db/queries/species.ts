@@ -45,8 +45,10 @@ export async function liveSpeciesByIds(ids: string[], conn: Db | Tx = db()): Pro
   return new Map(rows.map((r) => [r.id, r]));
 }
 
+// Drizzle wraps the driver's error; the unique-violation code sits on it or on its cause.
 function duplicateName(error: unknown): boolean {
-  return typeof error === "object" && error !== null && (error as { code?: string }).code === "23505";
+  const e = error as { code?: string; cause?: { code?: string } } | null;
+  return e?.code === "23505" || e?.cause?.code === "23505";
 }
 
 export async function createSpecies(values: SpeciesValues, userId: string) {
