@@ -19,15 +19,15 @@ test("the lead plans two batches, quarantines one, adds it to the display and mo
   await expect(page).toHaveURL(/\/board$/);
   await page.goto(`/projects/${t.project.id}/fish`);
   await ready(page);
-  await expect(page.getByText("Rules of thumb")).toBeVisible();
+  await expect(page.getByText("Rules of thumb", { exact: true })).toBeVisible();
 
   const planForm = page.getByRole("form", { name: "Plan a batch" });
-  await planForm.getByLabel("Species 1").selectOption({ label: "Harlequin rasbora (Trigonostigma heteromorpha) · fresh" });
+  await planForm.getByLabel("Species 1", { exact: true }).selectOption({ label: "Harlequin rasbora (Trigonostigma heteromorpha) · fresh" });
   await planForm.getByLabel("How many (species 1)").fill("8");
   await planForm.getByRole("button", { name: "Add batch to the plan" }).click();
   await expect(page.getByTestId("batch-1")).toContainText("Harlequin rasbora");
 
-  await planForm.getByLabel("Species 1").selectOption({ label: "Bronze corydoras (Corydoras aeneus) · fresh" });
+  await planForm.getByLabel("Species 1", { exact: true }).selectOption({ label: "Bronze corydoras (Corydoras aeneus) · fresh" });
   await planForm.getByLabel("How many (species 1)").fill("4");
   await planForm.getByRole("button", { name: "Add batch to the plan" }).click();
   const second = page.getByTestId("batch-2");
