@@ -6,12 +6,13 @@
 #   npm test -- --unit                        types and unit tests only (no services)
 #   npm test -- --integration [files…]        integration tests (all, or the files named)
 #   npm test -- --e2e [files…]                browser tests (all, or the files named)
+#   npm test -- --screens                     screenshots of the main screens into docs/screens
 # Environment: TEST_SLOT=N runs on its own ports, cluster and build folder, so several runs can
 # share a machine; SKIP_BUILD=1 reuses the last build of that slot; SKIP_TYPES=1 skips tsc.
 set -euo pipefail
 source "$(dirname "$0")/lib/common.sh"
 
-want_unit=1 want_int=1 want_e2e=1
+want_unit=1 want_int=1 want_e2e=1 want_screens=0
 int_files=() e2e_files=()
 if [ $# -gt 0 ]; then
   want_unit=0 want_int=0 want_e2e=0
@@ -21,6 +22,7 @@ if [ $# -gt 0 ]; then
       --unit) want_unit=1; target="" ;;
       --integration) want_int=1; target=int ;;
       --e2e) want_e2e=1; target=e2e ;;
+      --screens) want_screens=1; target="" ;;
       *) if [ "$target" = int ]; then int_files+=("$arg"); elif [ "$target" = e2e ]; then e2e_files+=("$arg"); else echo "Unknown argument: $arg" >&2; exit 2; fi ;;
     esac
   done
@@ -29,7 +31,7 @@ fi
 slot=${TEST_SLOT:-0}
 PORT=$((3100 + slot))
 PG_PORT=$((54339 + slot))
-SMTP_P=$((2525 + slot * 10)) MAILAPI_P=$((2580 + slot * 10)) S3_P=$((4579 + slot * 10))
+SMTP_P=$((2525 + slot * 10)) MAILAPI_P=$((2580 + slot * 10)) S3_P=$((4579 + slot * 10)) PAY_P=$((4575 + slot * 10))
 DIST=.next-test$([ "$slot" = 0 ] || echo "-$slot")
 
 cleanup() {
@@ -51,9 +53,9 @@ if [ "$want_unit" = 1 ]; then
   node node_modules/vitest/vitest.mjs run --project unit
 fi
 
-[ "$want_int" = 1 ] || [ "$want_e2e" = 1 ] || { echo "All tests passed."; exit 0; }
+[ "$want_int" = 1 ] || [ "$want_e2e" = 1 ] || [ "$want_screens" = 1 ] || { echo "All tests passed."; exit 0; }
 
-if [ "$want_e2e" = 1 ] && [ ! -x /usr/bin/chromium ]; then
+if { [ "$want_e2e" = 1 ] || [ "$want_screens" = 1 ]; } && [ ! -x /usr/bin/chromium ]; then
   echo "== installing Debian's Chromium for browser tests"
   sudo=""
   [ "$(id -u)" -eq 0 ] || sudo=sudo
@@ -67,7 +69,8 @@ export DATABASE_URL=postgres://tankwright@127.0.0.1:$PG_PORT/tankwright_test
 export NEXTAUTH_SECRET=test-secret-for-the-test-run-only
 export APP_URL=http://127.0.0.1:$PORT NEXTAUTH_URL=http://127.0.0.1:$PORT TEST_APP_URL=http://127.0.0.1:$PORT
 rm -rf ".data/s3-test-$slot"
-start_fakes "$SMTP_P" "$MAILAPI_P" "$S3_P" "$PROJECT_ROOT/.data/s3-test-$slot"
+start_fakes "$SMTP_P" "$MAILAPI_P" "$S3_P" "$PROJECT_ROOT/.data/s3-test-$slot" "$PAY_P"
+export TEST_PAYMENTS_URL=$PAYMENTS_API_URL
 "${TSX[@]}" scripts/migrate.ts
 "${TSX[@]}" scripts/seed.ts
 
@@ -85,6 +88,11 @@ CHILD_PIDS+=($!)
 CHILD_PIDS+=($!)
 wait_http "http://127.0.0.1:$PORT/api/health" 60
 
+# Screens first, while the database holds only the demo.
+if [ "$want_screens" = 1 ]; then
+  echo "== screens"
+  node node_modules/@playwright/test/cli.js test -c playwright.screens.config.ts
+fi
 if [ "$want_int" = 1 ]; then
   echo "== integration"
   node node_modules/vitest/vitest.mjs run --project integration "${int_files[@]}"

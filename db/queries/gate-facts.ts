@@ -34,6 +34,8 @@ export type FactRow = {
   first_batch_in_display: boolean;
   first_batch_days_left: number | null;
   quarantine_days_left: number | null;
+  deposit_paid: boolean | null;
+  deposit_required: boolean;
 };
 
 /**
@@ -71,7 +73,8 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
       from plan_batches pb where pb.project_id in (select id from ids)
     ),
     first_batch as (select distinct on (project_id) * from plan order by project_id, position),
-    quarantine as (select project_id, min(days_left)::int as days_left from plan where days_left is not null group by project_id)
+    quarantine as (select project_id, min(days_left)::int as days_left from plan where days_left is not null group by project_id),
+    deposits as (select i.project_id, bool_or(i.status = 'paid') as paid from invoices i where i.kind = 'deposit' and i.project_id in (select id from ids) group by i.project_id)
     select ids.id,
       s.complete as survey_complete,
       coalesce(a.current, false) as approval_current,
@@ -83,7 +86,9 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
       fb.project_id is not null as first_batch_planned,
       coalesce(fb.stocking_batch_id is not null, false) as first_batch_in_display,
       fb.days_left as first_batch_days_left,
-      q.days_left as quarantine_days_left
+      q.days_left as quarantine_days_left,
+      d.paid as deposit_paid,
+      coalesce(ps.deposit_bp, (select ms.deposit_bp from money_settings ms limit 1), 5000) > 0 as deposit_required
     from ids
     left join site_surveys s on s.project_id = ids.id
     left join approvals a on a.project_id = ids.id
@@ -91,6 +96,8 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
     left join leaks l on l.project_id = ids.id
     left join first_batch fb on fb.project_id = ids.id
     left join quarantine q on q.project_id = ids.id
+    left join deposits d on d.project_id = ids.id
+    left join payment_schedules ps on ps.project_id = ids.id
   `;
   // Inside a transaction the caller's connection must run it; otherwise it is a prepared statement.
   const rows = conn ? ((await conn.execute(query)).rows as FactRow[]) : await queryPrepared<FactRow>("gate-facts", query);
@@ -166,6 +173,7 @@ export function toGateFacts(r: FactRow, cycle: CycleVerdict | null): GateFacts {
     leak: { filled: r.filled, after24hPassed: r.after24h },
     cycle,
     firstBatch: { planned: r.first_batch_planned, inDisplay: r.first_batch_in_display, quarantineDaysLeft: r.first_batch_days_left },
+    deposit: r.deposit_paid === true ? "paid" : r.deposit_paid === false ? "unpaid" : r.deposit_required ? "not_invoiced" : "not_required",
   };
 }
 

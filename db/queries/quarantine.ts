@@ -61,7 +61,7 @@ export async function overrideQuarantine(opts: { projectId: string; batchId: str
 export async function addBatchToDisplay(opts: {
   projectId: string;
   batchId: string;
-  user: { id: string; role: string };
+  user: { id: string; canOverride: boolean };
   addedAt: Date;
   reTestOverride: string | null;
   now?: Date;
@@ -75,7 +75,7 @@ export async function addBatchToDisplay(opts: {
       throw unprocessable(`The batch can't go into the display yet. ${verdict.reason}`, {
         fields: { addedAt: verdict.reason },
         reasons: [verdict.reason],
-        canOverride: opts.user.role === "lead",
+        canOverride: opts.user.canOverride,
       });
     }
     const items = await tx

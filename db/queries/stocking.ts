@@ -64,7 +64,8 @@ function reTestReason(reTest: ReTest): string {
  */
 export async function addStockingBatch(opts: {
   projectId: string;
-  user: { id: string; role: string };
+  /** `canOverride` comes from the permission table (canOnProject "override_gate"). */
+  user: { id: string; canOverride: boolean };
   values: { addedAt: Date; description: string; fishCount: number; quarantineDays: number | null; overrideReason: string | null };
   now?: Date;
   /** Run inside the caller's transaction (a plan batch leaving quarantine records its batch this way). */
@@ -72,7 +73,7 @@ export async function addStockingBatch(opts: {
 }) {
   const { projectId, user, values } = opts;
   const now = opts.now ?? new Date();
-  if (values.overrideReason && user.role !== "lead") throw forbidden("Only the lead can add fish past the re-test rule.");
+  if (values.overrideReason && !user.canOverride) throw forbidden("Only the lead can add fish past the re-test rule.");
   const run = <T,>(fn: (tx: Tx) => Promise<T>) => (opts.tx ? fn(opts.tx) : db().transaction(fn));
   return run(async (tx) => {
     const project = await lockProject(tx, projectId);
@@ -96,7 +97,7 @@ export async function addStockingBatch(opts: {
     }
     if (reasons.length && !values.overrideReason) {
       const head = previous ? "The next batch has to wait." : "The first batch has to wait for the cycle.";
-      throw unprocessable(`${head} ${reasons.join(" ")}`, { reasons, canOverride: user.role === "lead" });
+      throw unprocessable(`${head} ${reasons.join(" ")}`, { reasons, canOverride: user.canOverride });
     }
     const [row] = await tx
       .insert(stockingBatches)

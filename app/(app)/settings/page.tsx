@@ -2,17 +2,19 @@ import type { Metadata } from "next";
 import { requirePageUser } from "@/server/session";
 import { getCompanyCycleRules } from "@/db/queries/cycle-state";
 import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
+import { listTestKits } from "@/db/queries/test-kits";
 import { CycleRulesForm } from "./_components/cycle-rules-form";
 import { QuarantineForm } from "./_components/quarantine-form";
 import { getQuarantineDays } from "@/db/queries/holding-tanks";
 import { DEFAULT_QUARANTINE_DAYS } from "@/lib/stocking/quarantine";
+import { TestKitsPanel } from "./_components/test-kits-panel";
 
 export const metadata: Metadata = { title: "Settings" };
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const [overrides, quarantineDays] = await Promise.all([getCompanyCycleRules(), getQuarantineDays()]);
+  const [overrides, kits, quarantineDays] = await Promise.all([getCompanyCycleRules(), listTestKits(), getQuarantineDays()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -20,6 +22,7 @@ export default async function SettingsPage() {
         <p className="text-sm text-muted">Company-wide rules. Changes apply to every project from the moment they are saved.</p>
       </div>
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
+      <TestKitsPanel kits={kits} />
       <QuarantineForm days={quarantineDays} defaultDays={DEFAULT_QUARANTINE_DAYS} />
     </div>
   );

@@ -1,4 +1,4 @@
-import type { SpeciesValues } from "@/app/(app)/species/species.schema";
+import type { SpeciesValues } from "./species.schema";
 
 /** Coral and invertebrate safety only mean something in salt water. */
 export function speciesValues(v: SpeciesValues) {

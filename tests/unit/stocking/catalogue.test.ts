@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { catalogueRecords } from "@/db/seed/species/seed";
-import { speciesSchema } from "@/app/(app)/species/species.schema";
+import { speciesSchema } from "@/app/api/species/species.schema";
 import { canOnProject } from "@/lib/auth/permissions";
 
 describe("the starting species catalogue", () => {

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { holdingTankSchema, type HoldingTankInput } from "../holding-tank.schema";
+import { holdingTankSchema, type HoldingTankInput } from "@/app/api/holding-tanks/holding-tank.schema";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
 import { inputStyles } from "@/components/ui/button-styles";

@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
-import { quarantineSettingSchema, type QuarantineSettingInput } from "../quarantine.schema";
+import { quarantineSettingSchema, type QuarantineSettingInput } from "@/app/api/settings/quarantine/quarantine.schema";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
 import { inputStyles } from "@/components/ui/button-styles";

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { speciesSchema, type SpeciesInput, type SpeciesValues } from "../species.schema";
+import { speciesSchema, type SpeciesInput, type SpeciesValues } from "@/app/api/species/species.schema";
 import { DIETS, SWIM_LEVELS, TEMPERAMENTS, WATER_KINDS } from "@/lib/stocking/species";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";

@@ -5,7 +5,7 @@ import { Field } from "@/components/ui/field";
 import { Caution } from "@/components/ui/caution";
 import { inputStyles } from "@/components/ui/button-styles";
 import { SubmitRow } from "@/components/ui/submit-row";
-import { addToDisplaySchema, quarantineNoteSchema, quarantineOverrideSchema, startQuarantineSchema } from "../quarantine.schema";
+import { addToDisplaySchema, quarantineNoteSchema, quarantineOverrideSchema, startQuarantineSchema } from "@/app/api/projects/[id]/stocking-plan/batches/[batchId]/quarantine.schema";
 import { useAction } from "./use-action";
 
 export type BatchCardView = {

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { Field } from "@/components/ui/field";
 import { inputStyles } from "@/components/ui/button-styles";
 import { SubmitRow } from "@/components/ui/submit-row";
-import { livestockEventSchema, MANUAL_EVENT_KINDS } from "../livestock-event.schema";
+import { livestockEventSchema, MANUAL_EVENT_KINDS } from "@/app/api/projects/[id]/livestock/events/livestock-event.schema";
 import { EVENT_LABELS } from "@/lib/stocking/census";
 import { useAction } from "./use-action";
 import type { GroupProps } from "./livestock-views";

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useFieldArray, useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { planBatchSchema, type PlanBatchInput, type PlanBatchValues } from "../plan.schema";
+import { planBatchSchema, type PlanBatchInput, type PlanBatchValues } from "@/app/api/projects/[id]/stocking-plan/plan.schema";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";

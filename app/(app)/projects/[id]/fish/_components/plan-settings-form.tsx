@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { planSettingsSchema, type PlanSettingsInput, type PlanSettingsValues } from "../plan.schema";
+import { planSettingsSchema, type PlanSettingsInput, type PlanSettingsValues } from "@/app/api/projects/[id]/stocking-plan/plan.schema";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
 import { inputStyles } from "@/components/ui/button-styles";

@@ -1,16 +1,12 @@
 import { NextResponse } from "next/server";
-import { parseId, parseJson, route } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { parseId, projectRoute } from "@/server/route";
 import { replacePlanBatch } from "@/db/queries/stocking-plan";
-import { planBatchSchema } from "@/app/(app)/projects/[id]/fish/plan.schema";
+import { planBatchSchema } from "../../plan.schema";
+
+type Params = { id: string; batchId: string };
 
 /** Changes the fish of a batch that is still only planned; the lead only. */
-export const PUT = route<{ id: string; batchId: string }>(async (req, { params }) => {
-  const { id, batchId } = await params;
-  const input = await parseJson(req, planBatchSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "edit_stocking_plan" });
-  await replacePlanBatch({ projectId: project.id, batchId: parseId(batchId, "That batch"), items: input.items, note: input.note });
+export const PUT = projectRoute<typeof planBatchSchema, undefined, Params>({ action: "edit_stocking_plan", schema: planBatchSchema }, async ({ input, project, params }) => {
+  await replacePlanBatch({ projectId: project.id, batchId: parseId(params.batchId, "That batch"), items: input.items, note: input.note });
   return NextResponse.json({ ok: true });
 });

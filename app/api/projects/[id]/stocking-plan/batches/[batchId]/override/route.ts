@@ -1,16 +1,12 @@
 import { NextResponse } from "next/server";
-import { parseId, parseJson, route } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { parseId, projectRoute } from "@/server/route";
 import { overrideQuarantine } from "@/db/queries/quarantine";
-import { quarantineOverrideSchema } from "@/app/(app)/projects/[id]/fish/quarantine.schema";
+import { quarantineOverrideSchema } from "../quarantine.schema";
+
+type Params = { id: string; batchId: string };
 
 /** The lead's written reason to release a batch before its quarantine period ends. */
-export const POST = route<{ id: string; batchId: string }>(async (req, { params }) => {
-  const { id, batchId } = await params;
-  const input = await parseJson(req, quarantineOverrideSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "override_quarantine" });
-  const batch = await overrideQuarantine({ projectId: project.id, batchId: parseId(batchId, "That batch"), userId: user.id, reason: input.reason });
+export const POST = projectRoute<typeof quarantineOverrideSchema, undefined, Params>({ action: "override_quarantine", schema: quarantineOverrideSchema }, async ({ input, project, user, params }) => {
+  const batch = await overrideQuarantine({ projectId: project.id, batchId: parseId(params.batchId, "That batch"), userId: user.id, reason: input.reason });
   return NextResponse.json({ batch });
 });
