@@ -3,6 +3,7 @@ import { and, asc, desc, eq, inArray, isNull, sql, type SQL, type SQLWrapper } f
 import { db, type Db, type Tx } from "../index";
 import { ammoniaDoses, projects, stageEvents, waterTests } from "../schema";
 import { getCompanyCycleRules } from "./cycle-state";
+import { approvalMatchesSql, approvalStaleWhySql } from "./load-basis";
 import { queryPrepared } from "./prepared";
 import { evaluateCycle } from "../../lib/cycling/evaluate-cycle";
 import type { AmmoniaDose, WaterTest } from "../../lib/cycling/readings";
@@ -26,6 +27,7 @@ export type FactRow = {
   survey_complete: boolean | null;
   approval_current: boolean;
   approval_any: boolean;
+  approval_stale_why: string | null;
   checklist_total: number;
   checklist_done: number;
   filled: boolean;
@@ -56,8 +58,9 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
     ),
     ticks as (select project_id, count(*) filter (where done)::int as done from latest_ticks group by project_id),
     approvals as (
-      select la.project_id, bool_or(td.data is not null and la.design_snapshot = td.data) as current
-      from load_approvals la left join tank_designs td on td.project_id = la.project_id
+      select la.project_id, bool_or(${approvalMatchesSql("la")}) as current,
+        (array_agg(${approvalStaleWhySql("la")} order by la.approved_at desc))[1] as stale_why
+      from load_approvals la
       where la.project_id in (select id from ids) and la.revoked_at is null
       group by la.project_id
     ),
@@ -79,6 +82,7 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
       s.complete as survey_complete,
       coalesce(a.current, false) as approval_current,
       a.project_id is not null as approval_any,
+      a.stale_why as approval_stale_why,
       (select count(*)::int from items) as checklist_total,
       coalesce(t.done, 0) as checklist_done,
       coalesce(l.filled, false) as filled,
@@ -169,6 +173,7 @@ export function toGateFacts(r: FactRow, cycle: CycleVerdict | null): GateFacts {
   return {
     survey: r.survey_complete === null ? null : { complete: r.survey_complete },
     loadApproval: r.approval_current ? "current" : r.approval_any ? "stale" : "none",
+    loadApprovalStaleWhy: r.approval_current ? null : r.approval_stale_why,
     aquascapeChecklist: { total: r.checklist_total, done: r.checklist_done },
     leak: { filled: r.filled, after24hPassed: r.after24h },
     cycle,

@@ -6,6 +6,11 @@ import { loadApprovals, siteSurveys, tankDesigns, users } from "../schema";
 import type { SiteSurvey } from "../../lib/survey/site-survey.schema";
 import type { LoadCheckResults, StoredDesign } from "../../lib/survey/load-check";
 import type { UnitSystem } from "../../lib/tank/units";
+import type { FloorBasis } from "../../lib/survey/floor-basis";
+import { approvalMatchesSql, approvalStaleWhySql } from "./load-basis";
+
+/** Approvals recorded now screen by top edge and floor type (rules version 2). */
+export const LOAD_RULES_VERSION = 2;
 
 export async function getSurvey(projectId: string) {
   const [row] = await db().select().from(siteSurveys).where(eq(siteSurveys.projectId, projectId));
@@ -44,8 +49,10 @@ export type ApprovalView = {
   approvedAt: Date;
   approvedByName: string;
   engineerReference: string | null;
-  /** True when the approved design is the design as it is now (jsonb equality, as the gate compares). */
+  /** True when the approval matches the design, floor inputs and code as they are now (as the gate compares). */
   current: boolean;
+  /** Why it no longer matches (see lib/stages/gates staleApprovalReason); null when current. */
+  staleWhy: string | null;
   revokedAt: Date | null;
   revokedByName: string | null;
   revokeReason: string | null;
@@ -63,7 +70,8 @@ export async function getLatestApproval(projectId: string): Promise<ApprovalView
       approvedAt: loadApprovals.approvedAt,
       approvedByName: approver.name,
       engineerReference: loadApprovals.engineerReference,
-      current: sql<boolean>`coalesce(${loadApprovals.designSnapshot} = (select d.data from ${tankDesigns} d where d.project_id = ${loadApprovals.projectId}), false)`,
+      current: sql<boolean>`${approvalMatchesSql('"load_approvals"')}`,
+      staleWhy: sql<string | null>`${approvalStaleWhySql('"load_approvals"')}`,
       revokedAt: loadApprovals.revokedAt,
       revokedByName: revoker.name,
       revokeReason: loadApprovals.revokeReason,
@@ -76,7 +84,7 @@ export async function getLatestApproval(projectId: string): Promise<ApprovalView
     .where(eq(loadApprovals.projectId, projectId))
     // A standing approval of the current design first (the one the gate counts), else the newest.
     .orderBy(
-      desc(sql`coalesce(${loadApprovals.revokedAt} is null and ${loadApprovals.designSnapshot} = (select d.data from ${tankDesigns} d where d.project_id = ${loadApprovals.projectId}), false)`),
+      desc(sql`(${loadApprovals.revokedAt} is null and ${approvalMatchesSql('"load_approvals"')})`),
       desc(loadApprovals.approvedAt),
     )
     .limit(1);
@@ -103,6 +111,8 @@ export async function approveLoad(opts: {
   userId: string;
   engineerReference: string | null;
   expectedUpdatedAt?: string;
+  /** The floor inputs and code the decision screens, kept so a later change makes the approval stale. */
+  floorBasis: FloorBasis;
   decide: (design: StoredDesign) => { results: LoadCheckResults } | { refused: string; field?: string };
 }): Promise<ApprovalOutcome> {
   return db().transaction(async (tx) => {
@@ -114,7 +124,7 @@ export async function approveLoad(opts: {
     const [existing] = await tx
       .select({ id: loadApprovals.id })
       .from(loadApprovals)
-      .where(and(eq(loadApprovals.projectId, opts.projectId), isNull(loadApprovals.revokedAt), sql`${loadApprovals.designSnapshot} = (select d.data from ${tankDesigns} d where d.project_id = ${opts.projectId})`))
+      .where(and(eq(loadApprovals.projectId, opts.projectId), isNull(loadApprovals.revokedAt), approvalMatchesSql('"load_approvals"')))
       .limit(1);
     if (existing) return { ok: false, reason: "already approved" };
     const decision = opts.decide(design.data as unknown as StoredDesign);
@@ -127,6 +137,8 @@ export async function approveLoad(opts: {
         resultSnapshot: JSON.parse(JSON.stringify(decision.results)) as Record<string, unknown>,
         engineerReference: opts.engineerReference,
         approvedBy: opts.userId,
+        floorBasis: opts.floorBasis,
+        rulesVersion: LOAD_RULES_VERSION,
       })
       .returning({ id: loadApprovals.id, approvedAt: loadApprovals.approvedAt });
     return { ok: true, ...row };

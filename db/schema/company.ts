@@ -8,6 +8,8 @@ export const company = pgTable("company", {
   phone: text("phone"),
   /** Partial cycle rules that override the defaults in lib/cycling. */
   cycleRules: jsonb("cycle_rules").$type<Record<string, unknown>>().notNull().default({}),
+  /** The building code floors are screened against (lib/tank/floor-codes). */
+  floorCode: text("floor_code").$type<"us-irc" | "en-uk">().notNull().default("us-irc"),
   /** Days a new batch of fish spends in a holding tank before the display. */
   quarantineDays: integer("quarantine_days").notNull().default(28),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),

@@ -1,4 +1,4 @@
-import { jsonb, pgTable, text, timestamp, uuid, boolean, index } from "drizzle-orm/pg-core";
+import { jsonb, pgTable, text, timestamp, uuid, boolean, index, integer } from "drizzle-orm/pg-core";
 import { projects } from "./projects";
 import { users } from "./users";
 import { attachments } from "./attachments";
@@ -50,6 +50,12 @@ export const loadApprovals = pgTable(
     revokedAt: timestamp("revoked_at", { withTimezone: true }),
     revokedBy: uuid("revoked_by").references(() => users.id),
     revokeReason: text("revoke_reason"),
+    /** The floor inputs and building code the approval screened (lib/survey/floor-basis); null before they were kept. */
+    floorBasis: jsonb("floor_basis").$type<Record<string, unknown>>(),
+    /** Set when a later re-screen under changed rules gives a different verdict: why it no longer stands. */
+    staleReason: text("stale_reason"),
+    /** 1: approved under the first glass and floor rules; 2: by top edge and floor type. */
+    rulesVersion: integer("rules_version").notNull().default(1),
   },
   (t) => [index("load_approvals_project_idx").on(t.projectId)],
 );

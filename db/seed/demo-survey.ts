@@ -4,6 +4,8 @@ import { loadCheck, type StoredDesign } from "../../lib/survey/load-check";
 import type { SiteSurvey } from "../../lib/survey/site-survey.schema";
 import { isSurveyComplete } from "../../lib/survey/survey-missing";
 import { validateDesign } from "../../lib/tank/design";
+import { floorBasis } from "../../lib/survey/floor-basis";
+import { DEFAULT_FLOOR_CODE } from "../../lib/tank/floor-codes";
 
 const DAY = 24 * 3600 * 1000;
 
@@ -12,6 +14,8 @@ type Common = Omit<StoredDesign, "shape" | "lengthMm" | "widthMm" | "heightMm" |
 function common(opts: { t: number; water?: "fresh" | "salt"; substrate?: Common["substrate"]; rock: number; sump: number; stand: Common["stand"] }): Common {
   return {
     panelMaterial: opts.t >= 15 ? "low-iron glass" : "glass",
+    // The demo's tanks have top frames; long open-top tanks would need a centre brace.
+    topEdge: "braced",
     panelThicknessMm: opts.t,
     waterBelowRimMm: 40,
     water: opts.water ?? "fresh",
@@ -119,6 +123,8 @@ export const seedDemoSurvey: FeatureSeed = async (tx, { now, projectIds, peopleI
       engineerReference: results.needsEngineerReference ? `${engineer}, floor check of ${approvedAt.toISOString().slice(0, 10)}, ref ${engineer.slice(0, 2).toUpperCase()}-${4100 + n}` : null,
       approvedBy: lead,
       approvedAt,
+      floorBasis: floorBasis(survey, DEFAULT_FLOOR_CODE),
+      rulesVersion: 2,
     });
     n++;
   }

@@ -19,7 +19,11 @@ export interface AmmoniaDoseInput {
   sourcePercent: number;
   /** Total ammonia already in the water, mg/L as NH3. */
   currentMgL?: number;
-  /** Density of the solution in g/mL. Dilute ammonia is a little under 1 (about 0.96 at 10 %, from memory), so 1 slightly overstates the mL, by about 4 %. */
+  /**
+   * Density of the solution in g/mL. Dilute ammonia is a little under 1 (about 0.96 at 10 %, from
+   * memory). Leaving it at 1 overstates the ammonia in each mL, so the mL to add come out about 4 %
+   * too few: it understates the dose.
+   */
   sourceDensityGPerMl?: number;
 }
 

@@ -6,6 +6,11 @@ export type GateFacts = {
   survey: { complete: boolean } | null;
   /** "current": approved for the design as it is now; "stale": only for an earlier design. */
   loadApproval: "current" | "stale" | "none";
+  /**
+   * Why a stale approval no longer stands: "design" (the design changed), "floor" (the floor inputs
+   * or the company's building code changed), or a sentence from a re-screen under changed rules.
+   */
+  loadApprovalStaleWhy?: string | null;
   /** The company's live aquascape checklist items, and how many of them are done for this project. */
   aquascapeChecklist: { total: number; done: number };
   /** The fill was recorded; the newest 24-hour check passed (null when there is none yet). */
@@ -25,6 +30,13 @@ export type GateResult = { open: boolean; reasons: string[] };
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
+/** A stale load approval's reason in plain words. */
+export function staleApprovalReason(why: string | null | undefined): string {
+  if (!why || why === "design") return "The load check was approved for an earlier design; approve it again.";
+  if (why === "floor") return "The floor details or the company's building code changed since the load check was approved; approve it again.";
+  return why;
+}
+
 /** The reasons the gate *into* `stage` is closed; empty when it is open. */
 export function reasonsInto(stage: Stage, facts: GateFacts): string[] {
   switch (stage) {
@@ -35,7 +47,7 @@ export function reasonsInto(stage: Stage, facts: GateFacts): string[] {
       return facts.survey.complete ? [] : ["The site survey isn't complete: finish its required fields and mark it complete."];
     case "aquascape": {
       const out: string[] = [];
-      if (facts.loadApproval === "stale") out.push("The load check was approved for an earlier design; approve it again.");
+      if (facts.loadApproval === "stale") out.push(staleApprovalReason(facts.loadApprovalStaleWhy));
       else if (facts.loadApproval === "none") out.push("The load check hasn't been approved by the lead.");
       if (facts.deposit === "unpaid") out.push("The deposit isn't paid yet: glass is ordered and install day booked once it is.");
       else if (facts.deposit === "not_invoiced") out.push("The deposit isn't paid yet: the client hasn't accepted a quote.");

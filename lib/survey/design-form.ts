@@ -11,6 +11,8 @@ export type DesignFormValues = {
   diameterMm: string;
   bowDepthMm: string;
   panelMaterial: string;
+  /** "free" (open top) or "braced" (top frame or brace). */
+  topEdge: string;
   panelThicknessMm: string;
   bottomThicknessMm: string;
   waterBelowRimMm: string;
@@ -65,6 +67,7 @@ export function emptyDesignForm(): DesignFormValues {
     diameterMm: "",
     bowDepthMm: "",
     panelMaterial: "glass",
+    topEdge: "free",
     panelThicknessMm: "",
     bottomThicknessMm: "",
     waterBelowRimMm: "",
@@ -84,6 +87,8 @@ export function designToForm(design: StoredDesign | null | undefined, system: Un
   if (!design) return form;
   form.shape = design.shape;
   form.panelMaterial = design.panelMaterial;
+  // Designs saved before the question was asked are open-top.
+  form.topEdge = design.topEdge ?? "free";
   form.water = design.water;
   form.substrate.type = design.substrate.type;
   form.stand.footprint.kind = design.stand.footprint.kind;
@@ -122,6 +127,7 @@ export function designFromForm(form: DesignFormValues, system: UnitSystem, store
     shape: form.shape,
     ...size,
     panelMaterial: form.panelMaterial,
+    topEdge: form.topEdge,
     panelThicknessMm: n("panelThicknessMm"),
     bottomThicknessMm: n("bottomThicknessMm"),
     waterBelowRimMm: n("waterBelowRimMm"),

@@ -23,7 +23,19 @@ const PLACES: Record<NumberKind, Record<UnitSystem, number>> = {
 export function toFieldText(kind: NumberKind, si: number | null | undefined, system: UnitSystem): string {
   if (si === null || si === undefined || !Number.isFinite(si)) return "";
   const shown = kind === "plain" ? si : toDisplay(kind, si, system);
-  return String(Number(shown.toFixed(PLACES[kind][system])));
+  return String(Number(shown.toFixed(fieldPlaces(kind, system, shown))));
+}
+
+/**
+ * Places a practitioner reads: whole millimetres for sizes (so 168 in shows as 4267 mm, not
+ * 4267.2), tenths for thicknesses under 100 mm; inches to 0.01 under 10 in, else 0.1.
+ */
+function fieldPlaces(kind: NumberKind, system: UnitSystem, shown: number): number {
+  if (kind === "length") {
+    if (system === "metric") return Math.abs(shown) < 100 ? 1 : 0;
+    return Math.abs(shown) < 10 ? 2 : 1;
+  }
+  return PLACES[kind][system];
 }
 
 /**

@@ -2,6 +2,8 @@ import { checkAccess, type AccessResult } from "../tank/access";
 import { ALL_CAUTIONS } from "../tank/cautions";
 import type { TankDesign } from "../tank/design";
 import { screenFloor, type FloorScreenResult } from "../tank/floor";
+import type { FloorCode } from "../tank/floor-codes";
+import { STANDARD_GRAVITY } from "../tank/units";
 import { outerPlanExtentMm } from "../tank/geometry";
 import { checkGlass, type GlassCheck } from "../tank/glass";
 import { computeLoad, type TankLoad } from "../tank/load";
@@ -38,7 +40,7 @@ export type LoadCheckResults = {
  * Runs every screening check for a design that has passed validateDesign, against the survey where
  * there is one. Pure, so the browser shows the same figures as you type that the server stores.
  */
-export function loadCheck(design: StoredDesign, survey?: Partial<SiteSurvey> | null): LoadCheckResults {
+export function loadCheck(design: StoredDesign, survey?: Partial<SiteSurvey> | null, code?: FloorCode): LoadCheckResults {
   const load = computeLoad(design);
   const glass = checkGlass(design);
   const s = survey ?? {};
@@ -46,11 +48,16 @@ export function loadCheck(design: StoredDesign, survey?: Partial<SiteSurvey> | n
   const floor =
     s.roomUse && s.floorType
       ? screenFloor({
+          totalWeightKN: (load.totalInstalledMassKg * STANDARD_GRAVITY) / 1000,
           pressureKPa: load.floorPressureKPa,
+          stand: design.stand,
           roomUse: s.roomUse,
           floorType: s.floorType,
-          joistDirection: isJoistedFloor(s.floorType) ? (s.joistDirection ?? undefined) : undefined,
-          distanceFromBearingWallMm: s.bearingWallDistanceMm ?? undefined,
+          floorLevel: s.floorLevel,
+          code,
+          joists: isJoistedFloor(s.floorType)
+            ? { spanMm: s.joistSpanMm, spacingMm: s.joistSpacingMm, direction: s.joistDirection, distanceFromSupportMm: s.bearingWallDistanceMm }
+            : undefined,
         })
       : null;
 
@@ -65,8 +72,9 @@ export function loadCheck(design: StoredDesign, survey?: Partial<SiteSurvey> | n
       ? checkAccess({ itemLengthMm: design.stand.lengthMm, itemWidthMm: design.stand.widthMm, itemHeightMm: standHeight, ...door })
       : null;
     access = { ...door, tank, stand };
-    if (!tank.fits) siteWarnings.push(`The tank won't get through the narrowest door as one piece. ${tank.message}`);
-    if (stand && !stand.fits) siteWarnings.push(`The stand won't get through the narrowest door assembled: build it in the room. ${stand.message}`);
+    // The door check beside the results gives the figures in the reader's units.
+    if (!tank.fits) siteWarnings.push("The tank won't get through the narrowest door as one piece: see the door check.");
+    if (stand && !stand.fits) siteWarnings.push("The stand won't get through the narrowest door assembled: build it in the room.");
   }
   if (s.roomLengthMm && s.roomWidthMm) {
     const [tankLong, tankShort] = [Math.max(design.stand.lengthMm, extent.lengthMm), Math.max(design.stand.widthMm, extent.widthMm)].sort((a, b) => b - a);
@@ -77,6 +85,6 @@ export function loadCheck(design: StoredDesign, survey?: Partial<SiteSurvey> | n
     siteWarnings.push("The stand and tank together are taller than the ceiling as measured.");
   }
 
-  const needsEngineerReference = floor !== null && floor.verdict !== "under";
+  const needsEngineerReference = floor !== null && floor.needsEngineer;
   return { load, floor, glass, access, siteWarnings, needsEngineerReference, cautions: ALL_CAUTIONS };
 }

@@ -7,7 +7,7 @@ import { text as cleanText } from "../validation/text";
  * Values that are present must make sense, so a typo never reaches the floor screening.
  */
 
-export const FLOOR_TYPES = ["timber joists", "concrete slab", "raised", "other"] as const;
+export const FLOOR_TYPES = ["timber joists", "concrete slab", "suspended concrete", "raised", "other"] as const;
 export const JOIST_DIRECTIONS = ["perpendicular", "parallel", "unknown"] as const;
 export const FLOOR_LEVELS = ["basement", "ground", "upper"] as const;
 export const ROOM_USES = ["living", "sleeping"] as const;
@@ -40,7 +40,7 @@ function choice<T extends readonly [string, ...string[]]>(values: T, message: st
 
 const text = (max: number) => cleanText(max, `Keep this under ${max} characters.`).nullish();
 
-export const siteSurveySchema = z.object({
+const surveyFields = z.object({
   // Room and floor
   roomUse: choice(ROOM_USES, "Choose living area or sleeping room."),
   floorType: choice(FLOOR_TYPES, "Choose the kind of floor."),
@@ -49,8 +49,9 @@ export const siteSurveySchema = z.object({
   roomWidthMm: length("Room width", 50_000),
   ceilingHeightMm: length("Ceiling height", 10_000),
   joistDirection: choice(JOIST_DIRECTIONS, "Choose how the joists run."),
-  joistSpanMm: length("Joist span", 15_000),
-  joistSpacingMm: length("Joist spacing", 2_000),
+  // Our own cut-offs: house joists rarely span past about 8 m or sit more than 600 mm apart.
+  joistSpanMm: length("Joist span", 12_000),
+  joistSpacingMm: length("Joist spacing", 1_200),
   joistSize: text(80),
   bearingWallDistanceMm: length("Distance from a load-bearing wall", 50_000, true),
   // Access
@@ -70,6 +71,17 @@ export const siteSurveySchema = z.object({
   sunExposure: choice(SUN_EXPOSURES, "Choose how much direct sun the spot gets."),
   heatSources: text(500),
   notes: text(4000),
+});
+
+/** The stand can't start past the joists' far support. */
+export const siteSurveySchema = surveyFields.superRefine((s, ctx) => {
+  if (s.joistSpanMm && s.bearingWallDistanceMm !== null && s.bearingWallDistanceMm !== undefined && s.bearingWallDistanceMm >= s.joistSpanMm) {
+    ctx.addIssue({
+      code: "custom",
+      path: ["bearingWallDistanceMm"],
+      message: "The distance from the bearing wall is past the joists' span: measure from the nearest wall or beam the joists rest on.",
+    });
+  }
 });
 
 export type SiteSurvey = z.infer<typeof siteSurveySchema>;

@@ -30,8 +30,11 @@ const footprint = z.discriminatedUnion(
   { error: "Choose a solid base or legs." },
 );
 
+export const TOP_EDGES = ["free", "braced"] as const;
+
 const common = {
   panelMaterial: z.enum(PANEL_MATERIALS, { error: "Choose the panel material." }),
+  topEdge: z.enum(TOP_EDGES, { error: "Say how the top edge is held: open top, or a top frame or brace." }).default("free"),
   panelThicknessMm: num("panel thickness"),
   bottomThicknessMm: num("bottom thickness").optional(),
   waterBelowRimMm: num("water level below the rim"),

@@ -99,6 +99,23 @@ function shortMm(mm: number): string {
 }
 
 /**
+ * The verdict in words with its clearance written by `length` (spare room rounded down, a shortfall
+ * rounded up), so each unit system can say it. checkAccess's own message uses whole millimetres.
+ */
+export function accessMessage(result: Pick<AccessResult, "fits" | "way" | "clearanceMm">, length: (mm: number, round: "down" | "up") => string): string {
+  switch (result.way) {
+    case "upright":
+      return `Fits upright with ${length(result.clearanceMm, "down")} to spare.`;
+    case "on edge":
+      return `Fits only turned on its side or end, with ${length(result.clearanceMm, "down")} to spare. Turn a glass tank only when empty and fully supported.`;
+    case "on the diagonal":
+      return `Fits only tilted through the door on the diagonal, with about ${length(result.clearanceMm, "down")} to spare at best. Plan the move and have enough people.`;
+    default:
+      return `Doesn't fit through this door, even tilted: about ${length(-result.clearanceMm, "up")} too big. Look for a wider way in, or remove the door and its stops.`;
+  }
+}
+
+/**
  * Checks whether an item gets through a doorway: upright first (safest for a
  * glass tank), then on edge (turned on its side or end), then tilted on the
  * diagonal. See the file comment for what the geometry leaves out.

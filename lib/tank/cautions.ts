@@ -15,5 +15,17 @@ export const WEIGHTS_FROM_INPUTS =
 export const HEAVY_LIFTING =
   "Heavy glass needs enough people and proper lifting gear to move safely.";
 
+/** Beside every glass result. */
+export const GLASS_CAUTIONS: readonly string[] = [
+  "A screening estimate, not a structural design: the panel maker and a structural engineer confirm the glass.",
+  "Local codes and licensed professionals decide.",
+];
+
+/** Beside every floor result. */
+export const FLOOR_CAUTIONS: readonly string[] = [
+  "A screening estimate, not a structural design: a structural engineer confirms the floor.",
+  "Local codes and licensed professionals decide.",
+];
+
 /** Every caution, in the order they are shown. */
 export const ALL_CAUTIONS: readonly string[] = [SCREENING_ONLY, LICENSED_WORK, WEIGHTS_FROM_INPUTS, HEAVY_LIFTING];

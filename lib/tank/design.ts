@@ -32,6 +32,11 @@ export interface StandDesign {
 
 interface TankDesignCommon {
   panelMaterial: PanelMaterial;
+  /**
+   * How the walls' top edge is held: "free" for an open top (rimless), "braced" for a top frame
+   * or perimeter brace that holds it. Designs saved before this was asked read as "free".
+   */
+  topEdge?: "free" | "braced";
   /** Side (wall) panel thickness, mm. */
   panelThicknessMm: number;
   /** Bottom panel thickness, mm; defaults to panelThicknessMm. */

@@ -23,7 +23,7 @@ test("the lead surveys a site, designs the tank, sees the load check, approves i
   await expect(page.getByRole("radio", { name: "mm · kg · L" })).toHaveAttribute("aria-checked", "true");
 
   // A first save with only some answers is kept as a draft, naming what is still needed.
-  await choose(page, { "Room use (required)": "Living area", "Floor type (required)": "Concrete slab" });
+  await choose(page, { "Room use (required)": "Living area", "Floor type (required)": "Concrete slab on the ground" });
   await page.getByRole("button", { name: "Save survey" }).click();
   await expect(page.getByRole("status").filter({ hasText: "Draft saved" })).toContainText("Narrowest door width");
 
@@ -47,7 +47,7 @@ test("the lead surveys a site, designs the tank, sees the load check, approves i
   await expect(page.getByRole("status").filter({ hasText: "Survey saved and complete" })).toBeVisible();
 
   // The design, in millimetres, kilograms and litres; the results follow as it is typed.
-  await choose(page, { Substrate: "Aqua soil" });
+  await choose(page, { Substrate: "Aqua soil", "How is the top edge of the walls held?": "A top frame or brace holds the top edge all round" });
   await fill(page, {
     "Length (mm)": "600",
     "Depth, front to back (mm)": "300",
@@ -67,7 +67,7 @@ test("the lead surveys a site, designs the tank, sees the load check, approves i
   });
   const results = page.getByTestId("load-results");
   await expect(results.getByTestId("net-volume")).toHaveText(/^40 L \(11 gal\)$/);
-  await expect(results.getByTestId("floor-verdict")).toHaveText("Under the rated load");
+  await expect(results.getByTestId("floor-verdict")).toHaveText("Within the screening allowance");
   await expect(results.getByTestId("access-tank")).toContainText("Fits upright");
   await expect(results.getByTestId("load-cautions")).toContainText("licensed professionals");
 
@@ -81,14 +81,14 @@ test("the lead surveys a site, designs the tank, sees the load check, approves i
   // In inches, pounds and gallons the same design reads differently; saving it unchanged keeps it
   // exactly as approved (no rounding drift), so the approval stays current.
   await page.getByRole("radio", { name: "in · lb · gal" }).click();
-  await expect(page.getByLabel("Length (in)", exact)).toHaveValue("23.62");
+  await expect(page.getByLabel("Length (in)", exact)).toHaveValue("23.6");
   await expect(results.getByTestId("net-volume")).toHaveText(/^11 gal \(40 L\)$/);
   const saved = page.waitForResponse((r) => r.url().endsWith(`/api/projects/${t.project.id}/design`) && r.request().method() === "PUT");
   await page.getByRole("button", { name: "Save design" }).click();
   expect((await saved).status()).toBe(200);
   await page.reload();
   await ready(page);
-  await expect(page.getByLabel("Length (in)", exact)).toHaveValue("23.62");
+  await expect(page.getByLabel("Length (in)", exact)).toHaveValue("23.6");
   await expect(page.getByTestId("approval-state")).toHaveText("Approved for this design");
 
   await page.getByRole("link", { name: "Load-check sheet" }).click();
@@ -98,5 +98,5 @@ test("the lead surveys a site, designs the tank, sees the load check, approves i
   await expect(page.getByRole("button", { name: "Print" })).toBeVisible();
   await expect(page.getByTestId("sheet-approval")).toContainText("Approved for this design");
   await expect(page.getByTestId("net-volume")).toHaveText(/^11 gal \(40 L\)$/);
-  await expect(page.getByTestId("floor-verdict")).toHaveText("Under the rated load");
+  await expect(page.getByTestId("floor-verdict")).toHaveText("Within the screening allowance");
 });

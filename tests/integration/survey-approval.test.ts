@@ -4,14 +4,14 @@ import { db } from "@/db";
 import { loadApprovals, tankDesigns } from "@/db/schema";
 import { makeTeam } from "../support/fixtures";
 import { signedIn, type Session } from "../support/http";
-import { completeSurvey, heavyDesign, lightDesign } from "../unit/survey/fixtures";
+import { completeSurvey, heavyDesign, joistSurvey, lightDesign } from "../unit/survey/fixtures";
 
 const approvals = (projectId: string) => db().select().from(loadApprovals).where(eq(loadApprovals.projectId, projectId));
 
-async function ready(design = lightDesign()) {
+async function ready(design = lightDesign(), survey = completeSurvey()) {
   const t = await makeTeam("stand_load_check");
   const lead = await signedIn(t.lead);
-  expect((await lead.request("PUT", `/api/projects/${t.project.id}/survey`, completeSurvey())).status).toBe(200);
+  expect((await lead.request("PUT", `/api/projects/${t.project.id}/survey`, survey)).status).toBe(200);
   expect((await lead.request("PUT", `/api/projects/${t.project.id}/design`, design)).status).toBe(200);
   return { ...t, leadSession: lead as Session };
 }
@@ -46,8 +46,8 @@ describe("load approval", () => {
     expect(await approvals(t.project.id)).toHaveLength(0);
   });
 
-  it("needs the engineer's reference when the floor screens over its rating", async () => {
-    const t = await ready(heavyDesign());
+  it("needs the engineer's reference when the floor screens over its allowance", async () => {
+    const t = await ready(heavyDesign(), joistSurvey());
     const res = await t.leadSession.post(`/api/projects/${t.project.id}/load-approval`, { engineerReference: "  " });
     expect(res.status).toBe(422);
     expect(res.json.error).toMatch(/structural engineer/);

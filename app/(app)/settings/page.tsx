@@ -8,13 +8,15 @@ import { QuarantineForm } from "./_components/quarantine-form";
 import { getQuarantineDays } from "@/db/queries/holding-tanks";
 import { DEFAULT_QUARANTINE_DAYS } from "@/lib/stocking/quarantine";
 import { TestKitsPanel } from "./_components/test-kits-panel";
+import { FloorCodeForm } from "./_components/floor-code-form";
+import { getCompanyFloorCode } from "@/db/queries/company-settings";
 
 export const metadata: Metadata = { title: "Settings" };
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const [overrides, kits, quarantineDays] = await Promise.all([getCompanyCycleRules(), listTestKits(), getQuarantineDays()]);
+  const [overrides, kits, floorCode, quarantineDays] = await Promise.all([getCompanyCycleRules(), listTestKits(), getCompanyFloorCode(), getQuarantineDays()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -23,6 +25,7 @@ export default async function SettingsPage() {
       </div>
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
       <TestKitsPanel kits={kits} />
+      <FloorCodeForm current={floorCode} />
       <QuarantineForm days={quarantineDays} defaultDays={DEFAULT_QUARANTINE_DAYS} />
     </div>
   );

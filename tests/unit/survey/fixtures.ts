@@ -25,6 +25,19 @@ export function completeSurvey(): SiteSurvey {
   };
 }
 
+/** The same room on an upper floor of timber joists: 3.6 m span at 400 mm, the stand 300 mm off a bearing wall, across the joists. */
+export function joistSurvey(): SiteSurvey {
+  return {
+    ...completeSurvey(),
+    floorType: "timber joists",
+    floorLevel: "upper",
+    joistDirection: "perpendicular",
+    joistSpanMm: 3600,
+    joistSpacingMm: 400,
+    bearingWallDistanceMm: 300,
+  };
+}
+
 /**
  * A small shrimp tank, 600 × 300 × 300 mm in 6 mm glass, on a wide low cabinet whose solid base
  * spreads the weight: it screens under a living-room floor's rating.
@@ -36,6 +49,7 @@ export function lightDesign(): StoredDesign & RectangularTankDesign {
     widthMm: 300,
     heightMm: 300,
     panelMaterial: "glass",
+    topEdge: "braced",
     panelThicknessMm: 6,
     waterBelowRimMm: 30,
     water: "fresh",
@@ -55,6 +69,7 @@ export function heavyDesign(): StoredDesign & RectangularTankDesign {
     widthMm: 600,
     heightMm: 750,
     panelMaterial: "low-iron glass",
+    topEdge: "braced",
     panelThicknessMm: 19,
     waterBelowRimMm: 40,
     water: "salt",

@@ -204,3 +204,15 @@ describe("computeLoad: properties", () => {
     );
   });
 });
+
+describe("floor area under a solid base", () => {
+  it("uses the solid base's own size, not the stand's outline, where they differ", () => {
+    // Stand outline 1800 × 600 mm, but it stands on a solid plinth of 1500 × 400 mm = 0.6 m².
+    const d = demoDesign();
+    const load = computeLoad({ ...d, stand: { ...d.stand, footprint: { kind: "solid", lengthMm: 1500, widthMm: 400 } } });
+    expect(load.footprintAreaM2).toBeCloseTo(0.6, 12);
+    // pressure = total weight / base area, not / the outline's 1.08 m²
+    expect(load.floorPressureKPa).toBeCloseTo((load.totalInstalledMassKg * 9.80665) / 1000 / 0.6, 9);
+    expect(load.loadPerLegKg).toBeNull();
+  });
+});

@@ -21,7 +21,7 @@ function Pairs({ rows }: { rows: [string, string][] }) {
 
 /** The design's inputs as the sheet prints them, in the reader's units. */
 export function DesignInputs({ design, system }: { design: StoredDesign; system: UnitSystem }) {
-  const len = (mm: number) => formatQuantity("length", mm, system, system === "metric" ? 0 : 2);
+  const len = (mm: number) => formatQuantity("length", mm, system, system === "metric" ? (mm < 100 ? 1 : 0) : 2);
   const size =
     design.shape === "cylinder"
       ? `Ø ${len(design.diameterMm)} × ${len(design.heightMm)} high`
@@ -32,6 +32,7 @@ export function DesignInputs({ design, system }: { design: StoredDesign; system:
   const rows: [string, string][] = [
     ["Shape", SHAPE[design.shape]],
     ["Outside size", size],
+    ["Top edge", (design.topEdge ?? "free") === "free" ? "open top, nothing holds the top edge" : "held by a top frame or brace"],
     ["Panels", `${design.panelMaterial}, ${len(design.panelThicknessMm)}${design.bottomThicknessMm ? `, bottom ${len(design.bottomThicknessMm)}` : ""}`],
     ["Water", `${design.water}${design.water === "salt" ? ` (${design.salinityPsu ?? 35} psu)` : ""}, ${formatQuantity("temperature", design.temperatureC, system)}, ${len(design.waterBelowRimMm)} below the rim`],
     ["Substrate", design.substrate.type === "none" ? "none" : `${design.substrate.type}, ${len(design.substrate.depthMm)} deep`],

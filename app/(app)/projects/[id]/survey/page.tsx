@@ -4,6 +4,8 @@ import { requirePageUser } from "@/server/session";
 import { requirePageProject } from "@/server/page-project";
 import { getDesign, getLatestApproval, getSurvey, getUnitSystem } from "@/db/queries/survey-design";
 import { loadCheck } from "@/lib/survey/load-check";
+import { getCompanyFloorCode } from "@/db/queries/company-settings";
+import { staleApprovalReason } from "@/lib/stages/gates";
 import { validateDesign } from "@/lib/tank/design";
 import { UnitToggle } from "@/components/ui/unit-toggle";
 import { buttonStyles } from "@/components/ui/button-styles";
@@ -18,8 +20,14 @@ export default async function SiteLoadPage({ params }: { params: Promise<{ id: s
   const { id } = await params;
   const user = await requirePageUser("lead", "crew");
   const { project } = await requirePageProject(id, user, "edit_survey");
-  const [survey, design, approval, system] = await Promise.all([getSurvey(project.id), getDesign(project.id), getLatestApproval(project.id), getUnitSystem(user.id)]);
-  const results = design && validateDesign(design.data).length === 0 ? loadCheck(design.data, survey?.data) : null;
+  const [survey, design, approval, system, floorCode] = await Promise.all([
+    getSurvey(project.id),
+    getDesign(project.id),
+    getLatestApproval(project.id),
+    getUnitSystem(user.id),
+    getCompanyFloorCode(),
+  ]);
+  const results = design && validateDesign(design.data).length === 0 ? loadCheck(design.data, survey?.data, floorCode) : null;
 
   return (
     <div className="flex flex-col gap-5">
@@ -37,7 +45,7 @@ export default async function SiteLoadPage({ params }: { params: Promise<{ id: s
         </div>
       </div>
       <SurveyForm projectId={project.id} stored={survey?.data ?? null} system={system} />
-      <DesignForm projectId={project.id} stored={design?.data ?? null} survey={survey?.data ?? null} system={system} />
+      <DesignForm projectId={project.id} stored={design?.data ?? null} survey={survey?.data ?? null} system={system} floorCode={floorCode} />
       <ApprovalPanel
         projectId={project.id}
         isLead={user.role === "lead"}
@@ -47,6 +55,7 @@ export default async function SiteLoadPage({ params }: { params: Promise<{ id: s
             approvedByName: approval.approvedByName,
             engineerReference: approval.engineerReference,
             current: approval.current,
+            staleReason: approval.current ? null : staleApprovalReason(approval.staleWhy),
             revokedAt: approval.revokedAt?.toISOString() ?? null,
             revokedByName: approval.revokedByName,
             revokeReason: approval.revokeReason,

@@ -3,13 +3,14 @@ import { projectRoute } from "@/server/route";
 import { getDesign, getSurvey, saveDesign } from "@/db/queries/survey-design";
 import { tankDesignSchema } from "@/lib/survey/tank-design.schema";
 import { loadCheck, type StoredDesign } from "@/lib/survey/load-check";
+import { getCompanyFloorCode } from "@/db/queries/company-settings";
 
 export const GET = projectRoute({ action: "edit_survey" }, async ({ project }) => {
-  const [design, survey] = await Promise.all([getDesign(project.id), getSurvey(project.id)]);
+  const [design, survey, code] = await Promise.all([getDesign(project.id), getSurvey(project.id), getCompanyFloorCode()]);
   return NextResponse.json({
     design: design?.data ?? null,
     updatedAt: design?.updatedAt ?? null,
-    results: design ? loadCheck(design.data, survey?.data) : null,
+    results: design ? loadCheck(design.data, survey?.data, code) : null,
   });
 });
 
@@ -21,7 +22,7 @@ export const GET = projectRoute({ action: "edit_survey" }, async ({ project }) =
 export const PUT = projectRoute({ action: "edit_survey", schema: tankDesignSchema }, async ({ input, project, user }) => {
   const design = input as StoredDesign;
   const saved = await saveDesign({ projectId: project.id, data: design, userId: user.id });
-  const survey = await getSurvey(project.id);
-  const results = loadCheck(saved.data, survey?.data);
+  const [survey, code] = await Promise.all([getSurvey(project.id), getCompanyFloorCode()]);
+  const results = loadCheck(saved.data, survey?.data, code);
   return NextResponse.json({ design: saved.data, updatedAt: saved.updatedAt, results, warnings: results.siteWarnings });
 });

@@ -3,6 +3,8 @@ import { projectRoute } from "@/server/route";
 import { AppError, conflict, unprocessable } from "@/server/errors";
 import { approveLoad, getLatestApproval, getSurvey } from "@/db/queries/survey-design";
 import { loadCheck } from "@/lib/survey/load-check";
+import { floorBasis } from "@/lib/survey/floor-basis";
+import { getCompanyFloorCode } from "@/db/queries/company-settings";
 import { validateDesign } from "@/lib/tank/design";
 import { approveLoadSchema } from "./load-approval.schema";
 import { revokeApproval } from "./revoke-approval";
@@ -19,7 +21,9 @@ export const POST = projectRoute({ action: "approve_load", schema: approveLoadSc
   const survey = await getSurvey(project.id);
   if (!survey?.complete) throw unprocessable("Finish the site survey first: the floor screening needs the room, floor and access details.");
   const engineerReference = input.engineerReference?.trim() || null;
+  const code = await getCompanyFloorCode();
   const outcome = await approveLoad({
+    floorBasis: floorBasis(survey.data, code),
     projectId: project.id,
     userId: user.id,
     engineerReference,
@@ -27,11 +31,18 @@ export const POST = projectRoute({ action: "approve_load", schema: approveLoadSc
     decide: (design) => {
       const problems = validateDesign(design);
       if (problems.length) return { refused: `The saved design has problems to fix first: ${problems.map((p) => p.message).join(" ")}` };
-      const results = loadCheck(design, survey.data);
-      if (!results.glass.ok) return { refused: "A panel is thinner than the water pressure needs. Change the panel thickness before approving." };
+      const results = loadCheck(design, survey.data, code);
+      if (!results.glass.ok) {
+        const pastTable = results.glass.panels.some((p) => p.lowerBound);
+        return {
+          refused: pastTable
+            ? "A panel is past the plate table, so its thickness can't be screened: add a centre brace or top frame, or get the panel maker's calculation, before approving."
+            : "A panel is thinner than the water pressure needs. Change the panel thickness before approving.",
+        };
+      }
       if (results.needsEngineerReference && !engineerReference) {
         return {
-          refused: "The tank is over the floor's rated load: enter the structural engineer's approval (name, firm, date and reference) before approving.",
+          refused: "The floor screening needs a structural engineer here: enter the engineer's approval (name, firm, date and reference) before approving.",
           field: "engineerReference",
         };
       }

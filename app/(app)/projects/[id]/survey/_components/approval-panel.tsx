@@ -11,6 +11,8 @@ export type ApprovalState = {
   approvedByName: string;
   engineerReference: string | null;
   current: boolean;
+  /** Why a standing approval no longer matches, in plain words. */
+  staleReason: string | null;
   revokedAt: string | null;
   revokedByName: string | null;
   revokeReason: string | null;
@@ -69,14 +71,14 @@ export function ApprovalPanel(props: {
   if (!approval) state = { text: "Not approved yet", cls: "bg-paper text-muted" };
   else if (approval.revokedAt) state = { text: "Approval withdrawn", cls: "bg-paper text-muted" };
   else if (approval.current) state = { text: "Approved for this design", cls: "bg-ok-soft text-ok" };
-  else state = { text: "Load check approved for an earlier design", cls: "bg-caution-soft text-caution" };
+  else state = { text: "Approval no longer stands", cls: "bg-caution-soft text-caution" };
 
   const blocked = !designUpdatedAt
     ? "Save a tank design first."
     : !surveyComplete
       ? "Finish the site survey first."
       : !glassOk
-        ? "A panel is too thin for the water pressure: change the design first."
+        ? "A panel doesn't pass the glass check (too thin, or past the plate table): change the design first."
         : null;
 
   return (
@@ -102,7 +104,7 @@ export function ApprovalPanel(props: {
           {standing && !approval.current && (
             <>
               <br />
-              The design has changed since. The lead must check the new figures and approve again.
+              <span data-testid="approval-stale-reason">{approval.staleReason ?? "The design has changed since."}</span> The lead must check the new figures and approve again.
             </>
           )}
         </p>

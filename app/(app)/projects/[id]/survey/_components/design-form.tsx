@@ -9,6 +9,7 @@ import { loadCheck, type StoredDesign } from "@/lib/survey/load-check";
 import type { SiteSurvey } from "@/lib/survey/site-survey.schema";
 import { tankDesignSchema } from "@/lib/survey/tank-design.schema";
 import { ALL_CAUTIONS } from "@/lib/tank/cautions";
+import type { FloorCode } from "@/lib/tank/floor-codes";
 import { unitLabel, type UnitSystem } from "@/lib/tank/units";
 import { useUnitsForm } from "./use-units-form";
 import { FieldGroup, NumberInput, SelectInput } from "./form-bits";
@@ -21,12 +22,16 @@ const MATERIALS = opts([["glass", "Float glass"], ["low-iron glass", "Low-iron g
 const WATER = opts([["fresh", "Fresh water"], ["salt", "Salt water"]]);
 const SUBSTRATES = opts([["sand", "Sand"], ["gravel", "Gravel"], ["aqua soil", "Aqua soil"], ["none", "None (bare bottom)"]]);
 const FOOTPRINTS = opts([["solid", "Solid base"], ["legs", "Legs"]]);
+const TOP_EDGES = opts([
+  ["free", "Open top: nothing holds the top edge (rimless)"],
+  ["braced", "A top frame or brace holds the top edge all round"],
+]);
 
 type Path = FieldPath<DesignFormValues>;
 
 /** The tank and stand design, with the load check worked out beside it as you type. */
-export function DesignForm(props: { projectId: string; stored: StoredDesign | null; survey: Partial<SiteSurvey> | null; system: UnitSystem }) {
-  const { projectId, stored, survey, system } = props;
+export function DesignForm(props: { projectId: string; stored: StoredDesign | null; survey: Partial<SiteSurvey> | null; system: UnitSystem; floorCode: FloorCode }) {
+  const { projectId, stored, survey, system, floorCode } = props;
   const router = useRouter();
   const [status, setStatus] = useState<{ ok: boolean; text: string } | null>(null);
   const [warnings, setWarnings] = useState<string[]>([]);
@@ -41,8 +46,8 @@ export function DesignForm(props: { projectId: string; stored: StoredDesign | nu
   const values = watch();
   const live = useMemo(() => {
     const parsed = tankDesignSchema.safeParse(designFromForm(values, system, stored));
-    return parsed.success ? { results: loadCheck(parsed.data as StoredDesign, survey) } : { problems: parsed.error.issues.map((i) => i.message) };
-  }, [values, system, stored, survey]);
+    return parsed.success ? { results: loadCheck(parsed.data as StoredDesign, survey, floorCode) } : { problems: parsed.error.issues.map((i) => i.message) };
+  }, [values, system, stored, survey, floorCode]);
 
   const e = formState.errors;
   const u = { length: unitLabel("length", system), mass: unitLabel("mass", system), volume: unitLabel("volume", system), temp: unitLabel("temperature", system) };
@@ -86,6 +91,7 @@ export function DesignForm(props: { projectId: string; stored: StoredDesign | nu
         </FieldGroup>
         <FieldGroup title="Panels">
           {select("panelMaterial", "Panel material", MATERIALS)}
+          <div className="sm:col-span-2">{select("topEdge", "How is the top edge of the walls held?", TOP_EDGES)}</div>
           {num("panelThicknessMm", `Panel thickness (${u.length})`)}
           {num("bottomThicknessMm", `Bottom thickness (${u.length}, optional)`, "Leave empty when the same as the sides.")}
         </FieldGroup>

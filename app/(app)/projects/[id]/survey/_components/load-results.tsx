@@ -1,15 +1,16 @@
 import type { ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
 import type { LoadCheckResults } from "@/lib/survey/load-check";
-import { formatArea, formatBoth, formatNumber, formatQuantity } from "@/lib/survey/format";
+import { formatArea, formatBoth, formatDensity, formatNumber, formatPressure, formatQuantity, formatThickness } from "@/lib/survey/format";
 import { DEFAULT_GLASS_SAFETY_FACTOR, ACRYLIC_DESIGN_STRESS_MPA, FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA } from "@/lib/tank/glass-strength";
 import type { UnitSystem } from "@/lib/tank/units";
+import { FloorScreening } from "./floor-screening";
+import { accessMessage } from "@/lib/tank/access";
 
-const VERDICT = {
-  under: { label: "Under the rated load", cls: "bg-ok-soft text-ok" },
-  over: { label: "Over the rated load", cls: "bg-caution-soft text-caution" },
-  "far over": { label: "Far over the rated load", cls: "bg-danger-soft text-danger" },
-} as const;
+/** 1 psi = 6.894757 kPa (NIST Handbook 44, Appendix C: 1 lbf/in² = 4.4482216152605 N / 0.00064516 m²). */
+const MPA_PER_PSI = 0.0068947572931683613;
+
+const TOP_EDGE_WORDS = { free: "open top (top edge free)", braced: "top frame or brace (top edge held)" } as const;
 
 function Row({ label, children, testId }: { label: string; children: ReactNode; testId?: string }) {
   return (
@@ -36,6 +37,13 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
   const { results, system, showCautions = true, twoColumns = false } = props;
   const { load, floor, glass, access } = results;
   const mass = (kg: number) => formatQuantity("mass", kg, system);
+  // Clearances never overstate a fit: spare room rounds down, a shortfall up (whole mm, or 0.1 in).
+  const gap = (mm: number, round: "down" | "up") => {
+    const step = system === "metric" ? 1 : 2.54;
+    const v = (round === "down" ? Math.floor(mm / step + 1e-6) : Math.ceil(mm / step - 1e-6)) * step;
+    return formatQuantity("length", v, system);
+  };
+  const stress = (mpa: number) => (system === "metric" ? `${mpa} MPa` : `${formatNumber(mpa / MPA_PER_PSI, 0)} psi`);
   return (
     <div className={twoColumns ? "gap-8 text-sm md:columns-2 print:columns-2 [&>*]:mb-5" : "flex flex-col gap-5 text-sm"} data-testid="load-results">
       <Block title="Water">
@@ -44,7 +52,7 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
           <Row label="Net water volume" testId="net-volume">
             {formatBoth("volume", load.netVolumeL, system)}
           </Row>
-          <Row label="Water density">{formatNumber(load.waterDensityKgM3, 1)} kg/m³</Row>
+          <Row label="Water density">{formatDensity(load.waterDensityKgM3, system)}</Row>
         </dl>
       </Block>
 
@@ -66,33 +74,15 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
         <dl>
           <Row label="Stand footprint">{formatArea(load.footprintAreaM2, system)}</Row>
           <Row label="Floor pressure" testId="floor-pressure">
-            {formatNumber(load.floorPressureKPa, 2)} kPa ({formatNumber(load.floorPressurePsf, 0)} lb/ft²)
+            {formatPressure(load.floorPressureKPa, system)}
           </Row>
           {load.loadPerLegKg !== null && <Row label="Load per leg">{formatBoth("mass", load.loadPerLegKg, system)}</Row>}
-          {load.legContactPressureKPa !== null && <Row label="Pressure under each leg">{formatNumber(load.legContactPressureKPa, 0)} kPa</Row>}
+          {load.legContactPressureKPa !== null && <Row label="Pressure under each leg">{formatPressure(load.legContactPressureKPa, system)}</Row>}
         </dl>
       </Block>
 
       <Block title="Floor screening">
-        {floor ? (
-          <div className="flex flex-col gap-2">
-            <p className="flex flex-wrap items-center gap-2">
-              <span className={`rounded-full px-2.5 py-0.5 text-xs font-semibold ${VERDICT[floor.verdict].cls}`} data-testid="floor-verdict">
-                {VERDICT[floor.verdict].label}
-              </span>
-              <span className="num text-muted">
-                {formatNumber(floor.ratio * 100, 0)} % of {floor.ratedPsf} lb/ft² ({formatNumber(floor.ratedKPa, 2)} kPa), IRC Table R301.5
-              </span>
-            </p>
-            <ul className="list-disc pl-5 text-ink/80">
-              {floor.messages.map((m) => (
-                <li key={m}>{m}</li>
-              ))}
-            </ul>
-          </div>
-        ) : (
-          <p className="text-muted">Fill in the room use and floor type in the survey to screen the floor.</p>
-        )}
+        {floor ? <FloorScreening floor={floor} system={system} /> : <p className="text-muted">Fill in the room use and floor type in the survey to screen the floor.</p>}
       </Block>
 
       <Block title="Through the narrowest door">
@@ -100,10 +90,10 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
           <dl>
             <Row label={`Door ${formatQuantity("length", access.doorWidthMm, system)} × ${formatQuantity("length", access.doorHeightMm, system)}`}>{""}</Row>
             <Row label="Tank" testId="access-tank">
-              <span className={access.tank.fits ? "" : "text-danger"}>{access.tank.message}</span>
+              <span className={access.tank.fits ? "" : "text-danger"}>{accessMessage(access.tank, gap)}</span>
             </Row>
             <Row label="Stand">
-              {access.stand ? <span className={access.stand.fits ? "" : "text-danger"}>{access.stand.message}</span> : <span className="text-muted">Enter the stand height to check it.</span>}
+              {access.stand ? <span className={access.stand.fits ? "" : "text-danger"}>{accessMessage(access.stand, gap)}</span> : <span className="text-muted">Enter the stand height to check it.</span>}
             </Row>
           </dl>
         ) : (
@@ -112,6 +102,9 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
       </Block>
 
       <Block title="Panel thickness">
+        <p className="text-muted" data-testid="top-edge">
+          Top edge: {TOP_EDGE_WORDS[glass.topEdge ?? "free"]}
+        </p>
         <table className="w-full text-left">
           <thead className="text-xs text-muted">
             <tr>
@@ -123,20 +116,31 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
           </thead>
           <tbody>
             {glass.panels.map((p) => (
-              <tr key={p.panel} className="border-t border-line/60" title={p.message}>
+              <tr key={p.panel} className="border-t border-line/60" data-testid={`panel-${p.panel}`}>
                 <td className="py-1">{p.panel[0].toUpperCase() + p.panel.slice(1)}</td>
-                <td className="num py-1 text-right">{formatNumber(p.requiredMm, 1)} mm</td>
-                <td className="num py-1 text-right">{formatNumber(p.enteredMm, 1)} mm</td>
-                <td className={`py-1 text-right font-semibold ${p.ok ? "text-ok" : "text-danger"}`}>{p.ok ? "Enough" : "Too thin"}</td>
+                <td className="num py-1 text-right">
+                  {p.lowerBound ? "at least " : ""}
+                  {formatThickness(p.requiredMm, system)}
+                </td>
+                <td className="num py-1 text-right">{formatThickness(p.enteredMm, system)}</td>
+                <td className={`py-1 text-right font-semibold ${p.ok ? "text-ok" : "text-danger"}`}>
+                  {p.ok ? "Enough" : p.lowerBound && p.enteredMm >= p.requiredMm ? "Past the table" : "Too thin"}
+                </td>
               </tr>
             ))}
           </tbody>
         </table>
-        <p className="text-xs text-muted">
-          Walls checked full to the rim. Glass: modulus of rupture {FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA} MPa with a safety factor of {DEFAULT_GLASS_SAFETY_FACTOR} (common
-          practice); acrylic: {ACRYLIC_DESIGN_STRESS_MPA} MPa long-term design stress. Plate coefficients from Roark&apos;s Formulas for Stress and Strain (from memory).
+        <ul className="list-disc pl-5 text-ink/80">
+          {[...new Set(glass.panels.flatMap((p) => p.notes ?? []))].map((n) => (
+            <li key={n}>{n}</li>
+          ))}
+        </ul>
+        <p className="text-xs text-muted" data-testid="glass-sources">
+          Walls checked full to the rim. Glass: modulus of rupture {stress(FLOAT_GLASS_MODULUS_OF_RUPTURE_MPA)} with a safety factor of {DEFAULT_GLASS_SAFETY_FACTOR} (common
+          practice); acrylic: {stress(ACRYLIC_DESIGN_STRESS_MPA)} long-term design stress. {glass.panels.map((p) => `${p.panel[0].toUpperCase() + p.panel.slice(1)}: ${p.source}.`).join(" ")}
         </p>
-        {!glass.ok && <Caution tone="danger">{glass.panels.filter((p) => !p.ok).map((p) => p.message).join(" ")}</Caution>}
+        {!glass.ok && <Caution tone="danger">One or more panels don&apos;t pass: see the notes above before ordering glass.</Caution>}
+        <ResultCautions cautions={glass.cautions ?? []} testId="glass-cautions" />
       </Block>
 
       {results.siteWarnings.length > 0 && (
@@ -153,6 +157,15 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
 
       {showCautions && <LoadCautions cautions={results.cautions} />}
     </div>
+  );
+}
+
+/** The short cautions kept beside a glass or floor result. */
+export function ResultCautions({ cautions, testId }: { cautions: readonly string[]; testId: string }) {
+  return (
+    <p className="text-xs text-caution" data-testid={testId}>
+      {cautions.join(" ")}
+    </p>
   );
 }
 

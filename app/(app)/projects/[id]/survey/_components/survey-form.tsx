@@ -11,7 +11,13 @@ import { useUnitsForm } from "./use-units-form";
 import { FieldGroup, NumberInput, SelectInput, TextInput, withBlank } from "./form-bits";
 
 const opts = (pairs: [string, string][]) => pairs.map(([value, label]) => ({ value, label }));
-const FLOOR = opts([["timber joists", "Timber joists"], ["concrete slab", "Concrete slab"], ["raised", "Raised floor"], ["other", "Other"]]);
+const FLOOR = opts([
+  ["timber joists", "Timber joists (suspended timber floor)"],
+  ["concrete slab", "Concrete slab on the ground"],
+  ["suspended concrete", "Suspended concrete (beams, planks or a slab above a space)"],
+  ["raised", "Raised floor on joists"],
+  ["other", "Other or not known"],
+]);
 const JOISTS = opts([["perpendicular", "Across the tank's long side"], ["parallel", "Along the tank's long side"], ["unknown", "Not known yet"]]);
 const LEVEL = opts([["basement", "Basement"], ["ground", "Ground floor"], ["upper", "Upper floor"]]);
 const ROOM = opts([["living", "Living area"], ["sleeping", "Sleeping room"]]);
@@ -82,7 +88,7 @@ export function SurveyForm({ projectId, stored, system }: { projectId: string; s
             {len("joistSpanMm", "Joist span", "Between the supports under the joists.")}
             {len("joistSpacingMm", "Joist spacing", "Centre to centre.")}
             <TextInput {...reg("joistSize")} label="Joist size" hint="As found, e.g. 47 × 195 mm." />
-            {len("bearingWallDistanceMm", "Distance from a load-bearing wall", "0 when the tank stands against one.")}
+            {len("bearingWallDistanceMm", "Distance from a load-bearing wall", "From the nearest wall or beam the joists rest on to the stand's near edge; 0 when it stands against one.")}
           </>
         )}
       </FieldGroup>
