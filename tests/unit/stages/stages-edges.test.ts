@@ -38,7 +38,7 @@ describe("gates: every reason in full", () => {
       "The cycle isn't finished yet.",
     ]);
     expect(reasonsInto("first_stocking", { ...none, cycle: { ready: true, reasons: [] } })).toEqual([]);
-    expect(reasonsInto("in_service", none)).toEqual(["No fish have been recorded yet; record the first batch."]);
+    expect(reasonsInto("in_service", none)).toEqual(["There is no stocking plan yet; the lead plans the first batch under Fish."]);
   });
 
   it("a one-stage move gives the reasons as they are; a jump labels each with its stage", () => {
