@@ -11,3 +11,4 @@ export * from "./schema/visits";
 export * from "./schema/test-kits";
 export * from "./schema/money";
 export * from "./schema/message-reads";
+export * from "./schema/livestock";

@@ -97,6 +97,11 @@ export function BoardCard({ card, now, error, saving, onMoveTo }: { card: Card; 
           {card.nextNeeds.length ? `Before ${STAGE_LABELS[next]}: ${card.nextNeeds[0]}${card.nextNeeds.length > 1 ? ` (+${card.nextNeeds.length - 1} more)` : ""}` : `Ready for ${STAGE_LABELS[next]}`}
         </p>
       )}
+      {card.quarantineDaysLeft != null && (
+        <p className="mt-1 text-xs text-muted" data-testid="quarantine-days">
+          {card.quarantineDaysLeft > 0 ? `Fish in quarantine: ${card.quarantineDaysLeft} ${card.quarantineDaysLeft === 1 ? "day" : "days"} left` : "Fish ready to leave quarantine"}
+        </p>
+      )}
       {error && (
         <div role="alert" className="mt-2 rounded bg-danger-soft px-1.5 py-1 text-xs text-danger" data-testid="card-error">
           {error.map((e) => (

@@ -8,7 +8,7 @@ export function navItemsFor(role: Role, devTools: boolean, unreadMessages = 0): 
   const badge = unreadMessages > 0 ? { count: unreadMessages, label: `${unreadMessages} unread client ${unreadMessages === 1 ? "message" : "messages"}` } : undefined;
   const items: NavItem[] = [{ href: "/board", label: "Installs", badge }];
   if (role === "lead") {
-    items.push({ href: "/money", label: "Money" }, { href: "/people", label: "People" }, { href: "/checklists", label: "Checklists" }, { href: "/settings", label: "Settings" }, { href: "/outbox", label: "Mail out" });
+    items.push({ href: "/money", label: "Money" }, { href: "/people", label: "People" }, { href: "/checklists", label: "Checklists" }, { href: "/species", label: "Species" }, { href: "/holding-tanks", label: "Holding tanks" }, { href: "/settings", label: "Settings" }, { href: "/outbox", label: "Mail out" });
     if (devTools) items.push({ href: "/dev/mail", label: "Caught mail" });
   }
   items.push({ href: "/account", label: "Account" });

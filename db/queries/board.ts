@@ -34,6 +34,8 @@ export type BoardCard = {
   crew: BoardPerson[];
   /** What the gate into the next stage is missing: null in the last stage, [] when ready. */
   nextNeeds: string[] | null;
+  /** Days left for the batch of fish in quarantine (the soonest, if several); null when none is. */
+  quarantineDaysLeft: number | null;
 };
 
 export type BoardData = { cards: BoardCard[]; people: BoardPerson[] };
@@ -111,6 +113,7 @@ export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new
       leadName: r.lead_name,
       crew,
       nextNeeds: f ? nextStageNeeds(r.stage, f) : null,
+      quarantineDaysLeft: rec?.quarantine_days_left ?? null,
     };
   });
   return { cards, people: [...people.values()].sort((a, b) => a.name.localeCompare(b.name)) };

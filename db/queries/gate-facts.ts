@@ -32,7 +32,10 @@ export type FactRow = {
   checklist_done: number;
   filled: boolean;
   after24h: boolean | null;
-  batches: number;
+  first_batch_planned: boolean;
+  first_batch_in_display: boolean;
+  first_batch_days_left: number | null;
+  quarantine_days_left: number | null;
   deposit_paid: boolean | null;
   deposit_required: boolean;
 };
@@ -66,7 +69,14 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
         (array_agg(lc.passed order by lc.at desc, lc.id desc) filter (where lc.kind = 'after 24 hours'))[1] as after24h
       from leak_checks lc where lc.project_id in (select id from ids) group by lc.project_id
     ),
-    batches as (select sb.project_id, count(*)::int as n from stocking_batches sb where sb.project_id in (select id from ids) group by sb.project_id),
+    plan as (
+      select pb.project_id, pb.stocking_batch_id, pb.quarantine_started_at, pb.quarantine_days, pb.position,
+        case when pb.quarantine_started_at is not null and pb.stocking_batch_id is null
+          then greatest(0, ceil(extract(epoch from (pb.quarantine_started_at + pb.quarantine_days * interval '1 day' - now())) / 86400))::int end as days_left
+      from plan_batches pb where pb.project_id in (select id from ids)
+    ),
+    first_batch as (select distinct on (project_id) * from plan order by project_id, position),
+    quarantine as (select project_id, min(days_left)::int as days_left from plan where days_left is not null group by project_id),
     deposits as (select i.project_id, bool_or(i.status = 'paid') as paid from invoices i where i.kind = 'deposit' and i.project_id in (select id from ids) group by i.project_id)
     select ids.id,
       s.complete as survey_complete,
@@ -77,7 +87,10 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
       coalesce(t.done, 0) as checklist_done,
       coalesce(l.filled, false) as filled,
       l.after24h,
-      coalesce(b.n, 0) as batches,
+      fb.project_id is not null as first_batch_planned,
+      coalesce(fb.stocking_batch_id is not null, false) as first_batch_in_display,
+      fb.days_left as first_batch_days_left,
+      q.days_left as quarantine_days_left,
       d.paid as deposit_paid,
       coalesce(ps.deposit_bp, (select ms.deposit_bp from money_settings ms limit 1), 5000) > 0 as deposit_required
     from ids
@@ -85,7 +98,8 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
     left join approvals a on a.project_id = ids.id
     left join ticks t on t.project_id = ids.id
     left join leaks l on l.project_id = ids.id
-    left join batches b on b.project_id = ids.id
+    left join first_batch fb on fb.project_id = ids.id
+    left join quarantine q on q.project_id = ids.id
     left join deposits d on d.project_id = ids.id
     left join payment_schedules ps on ps.project_id = ids.id
   `;
@@ -168,7 +182,7 @@ export function toGateFacts(r: FactRow, cycle: CycleVerdict | null): GateFacts {
     aquascapeChecklist: { total: r.checklist_total, done: r.checklist_done },
     leak: { filled: r.filled, after24hPassed: r.after24h },
     cycle,
-    stockingBatches: r.batches,
+    firstBatch: { planned: r.first_batch_planned, inDisplay: r.first_batch_in_display, quarantineDaysLeft: r.first_batch_days_left },
     deposit: r.deposit_paid === true ? "paid" : r.deposit_paid === false ? "unpaid" : r.deposit_required ? "not_invoiced" : "not_required",
   };
 }

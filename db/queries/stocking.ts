@@ -68,11 +68,14 @@ export async function addStockingBatch(opts: {
   user: { id: string; canOverride: boolean };
   values: { addedAt: Date; description: string; fishCount: number; quarantineDays: number | null; overrideReason: string | null };
   now?: Date;
+  /** Run inside the caller's transaction (a plan batch leaving quarantine records its batch this way). */
+  tx?: Tx;
 }) {
   const { projectId, user, values } = opts;
   const now = opts.now ?? new Date();
   if (values.overrideReason && !user.canOverride) throw forbidden("Only the lead can add fish past the re-test rule.");
-  return db().transaction(async (tx) => {
+  const run = <T,>(fn: (tx: Tx) => Promise<T>) => (opts.tx ? fn(opts.tx) : db().transaction(fn));
+  return run(async (tx) => {
     const project = await lockProject(tx, projectId);
     if (project.stage !== "first_stocking" && project.stage !== "in_service") {
       throw conflict("Fish are recorded from first stocking on; move the project into first stocking first.");

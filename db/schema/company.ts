@@ -14,5 +14,7 @@ export const company = pgTable("company", {
   stageDurations: jsonb("stage_durations").$type<Record<string, unknown>>().notNull().default({}),
   /** How long a client notice waits in the outbox before it leaves; null uses the deployment's default. */
   noticeDelaySeconds: integer("notice_delay_seconds"),
+  /** Days a new batch of fish spends in a holding tank before the display. */
+  quarantineDays: integer("quarantine_days").notNull().default(28),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });

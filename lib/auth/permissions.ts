@@ -30,7 +30,14 @@ export type ProjectAction =
   // Pricing, issuing quotes, setting the schedule, recording transfers.
   | "manage_money"
   // Accepting the quote and paying invoices: the project's own client.
-  | "accept_and_pay";
+  | "accept_and_pay"
+  // The stocking plan (lead edits, crew views), quarantine, and the livestock record (the client reads it).
+  | "view_stocking_plan"
+  | "edit_stocking_plan"
+  | "record_quarantine"
+  | "override_quarantine"
+  | "view_livestock"
+  | "record_livestock";
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
@@ -47,8 +54,12 @@ const CREW: ProjectAction[] = [
   "upload_photo",
   "file_stage_photos",
   "send_message",
+  "view_stocking_plan",
+  "record_quarantine",
+  "view_livestock",
+  "record_livestock",
 ];
-const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message", "see_money", "accept_and_pay"];
+const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message", "see_money", "accept_and_pay", "view_livestock"];
 // The client's signature and card are theirs: nobody accepts or pays in their place.
 const CLIENT_ONLY: ProjectAction[] = ["accept_and_pay"];
 

@@ -17,7 +17,8 @@ export type GateFacts = {
   leak: { filled: boolean; after24hPassed: boolean | null };
   /** The cycle gate's verdict, or null when it wasn't evaluated for this project. */
   cycle: { ready: boolean; reasons: string[] } | null;
-  stockingBatches: number;
+  /** The stocking plan's first batch: whether there is one, and whether it is in the display yet. */
+  firstBatch: { planned: boolean; inDisplay: boolean; quarantineDaysLeft: number | null };
   /**
    * The deposit: "paid"; "unpaid" (invoiced, not yet paid); "not_invoiced" (no quote accepted yet);
    * "not_required" (the project's schedule asks no deposit).
@@ -69,7 +70,13 @@ export function reasonsInto(stage: Stage, facts: GateFacts): string[] {
       if (!facts.cycle) return ["The cycle hasn't been evaluated yet."];
       return facts.cycle.ready ? [] : facts.cycle.reasons.length ? facts.cycle.reasons : ["The cycle isn't finished yet."];
     case "in_service":
-      return facts.stockingBatches > 0 ? [] : ["No fish have been recorded yet; record the first batch."];
+      if (facts.firstBatch.inDisplay) return [];
+      if (!facts.firstBatch.planned) return ["There is no stocking plan yet; the lead plans the first batch under Fish."];
+      if (facts.firstBatch.quarantineDaysLeft != null) {
+        const n = facts.firstBatch.quarantineDaysLeft;
+        return [n > 0 ? `The first batch is in quarantine: ${plural(n, "day", "days")} left.` : "The first batch has finished quarantine; add it to the display."];
+      }
+      return ["The first batch hasn't gone into quarantine yet."];
   }
 }
 

@@ -93,12 +93,12 @@ describe("the gates between stages", () => {
     expect(res.status, JSON.stringify(res.json)).toBe(200);
   });
 
-  it("into in service: at least one batch of fish", async () => {
+  it("into in service: the plan's first batch in the display", async () => {
     const t = await makeTeam("first_stocking");
     const s = await signedIn(t.crew);
     let res = await move(s, t.project.id, "in_service");
     expect(res.status).toBe(422);
-    expect(res.json.reasons[0]).toContain("No fish have been recorded");
+    expect(res.json.reasons[0]).toContain("There is no stocking plan yet");
     await recordStocking(t.project, t.crew);
     res = await move(s, t.project.id, "in_service");
     expect(res.status).toBe(200);

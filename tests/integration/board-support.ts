@@ -2,7 +2,7 @@
 import { and, eq, isNull } from "drizzle-orm";
 import { generateKeyBetween } from "fractional-indexing";
 import { db } from "@/db";
-import { checklistItems, checklistTicks, leakChecks, loadApprovals, siteSurveys, stageEvents, stockingBatches, tankDesigns, waterTests } from "@/db/schema";
+import { planBatches, checklistItems, checklistTicks, leakChecks, loadApprovals, siteSurveys, stageEvents, stockingBatches, tankDesigns, waterTests } from "@/db/schema";
 
 type Id = { id: string };
 const HOUR = 3_600_000;
@@ -61,6 +61,15 @@ export async function finishCycle(project: Id, by: Id) {
   );
 }
 
+/** The plan's first batch, through quarantine and into the display, as the in-service gate reads it. */
 export async function recordStocking(project: Id, by: Id) {
-  await db().insert(stockingBatches).values({ projectId: project.id, addedAt: new Date(), description: "Six invented tetras", fishCount: 6, byUserId: by.id });
+  const [batch] = await db().insert(stockingBatches).values({ projectId: project.id, addedAt: new Date(), description: "Six invented tetras", fishCount: 6, byUserId: by.id }).returning();
+  await db().insert(planBatches).values({
+    projectId: project.id,
+    position: 1,
+    quarantineStartedAt: new Date(Date.now() - 30 * 24 * HOUR),
+    quarantineDays: 28,
+    stockingBatchId: batch.id,
+    createdBy: by.id,
+  });
 }

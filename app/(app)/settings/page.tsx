@@ -9,6 +9,9 @@ import { getStageDurationOverrides } from "@/db/queries/stage-durations";
 import { DEFAULT_STAGE_DURATIONS } from "@/lib/stages/durations";
 import { getCompanyNoticeDelay } from "@/db/queries/outbox";
 import { env } from "@/env";
+import { QuarantineForm } from "./_components/quarantine-form";
+import { getQuarantineDays } from "@/db/queries/holding-tanks";
+import { DEFAULT_QUARANTINE_DAYS } from "@/lib/stocking/quarantine";
 import { TestKitsPanel } from "./_components/test-kits-panel";
 import { FloorCodeForm } from "./_components/floor-code-form";
 import { getCompanyFloorCode } from "@/db/queries/company-settings";
@@ -18,7 +21,7 @@ export const metadata: Metadata = { title: "Settings" };
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
   await requirePageUser("lead");
-  const [overrides, kits, floorCode, durationOverrides, companyDelay] = await Promise.all([getCompanyCycleRules(), listTestKits(), getCompanyFloorCode(), getStageDurationOverrides(), getCompanyNoticeDelay()]);
+  const [overrides, kits, floorCode, durationOverrides, companyDelay, quarantineDays] = await Promise.all([getCompanyCycleRules(), listTestKits(), getCompanyFloorCode(), getStageDurationOverrides(), getCompanyNoticeDelay(), getQuarantineDays()]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -33,6 +36,7 @@ export default async function SettingsPage() {
       <CycleRulesForm overrides={overrides} defaults={{ ...DEFAULT_CYCLE_RULES }} />
       <TestKitsPanel kits={kits} />
       <FloorCodeForm current={floorCode} />
+      <QuarantineForm days={quarantineDays} defaultDays={DEFAULT_QUARANTINE_DAYS} />
     </div>
   );
 }

@@ -7,7 +7,7 @@ const none: GateFacts = {
   aquascapeChecklist: { total: 0, done: 0 },
   leak: { filled: false, after24hPassed: null },
   cycle: null,
-  stockingBatches: 0,
+  firstBatch: { planned: false, inDisplay: false, quarantineDaysLeft: null },
   deposit: "not_invoiced",
 };
 const all: GateFacts = {
@@ -16,7 +16,7 @@ const all: GateFacts = {
   aquascapeChecklist: { total: 4, done: 4 },
   leak: { filled: true, after24hPassed: true },
   cycle: { ready: true, reasons: [] },
-  stockingBatches: 1,
+  firstBatch: { planned: true, inDisplay: true, quarantineDaysLeft: null },
   deposit: "paid",
 };
 
@@ -64,8 +64,16 @@ describe("checkGate", () => {
     expect(reasonsInto("first_stocking", { ...all, cycle: null })).toHaveLength(1);
   });
 
-  it("needs a batch of fish for in service", () => {
-    expect(reasonsInto("in_service", { ...all, stockingBatches: 0 })).toHaveLength(1);
+  it("reads the plan's first batch for in service", () => {
+    expect(reasonsInto("in_service", { ...all, firstBatch: { planned: false, inDisplay: false, quarantineDaysLeft: null } })).toEqual([
+      "There is no stocking plan yet; the lead plans the first batch under Fish.",
+    ]);
+    expect(reasonsInto("in_service", { ...all, firstBatch: { planned: true, inDisplay: false, quarantineDaysLeft: null } })).toEqual(["The first batch hasn't gone into quarantine yet."]);
+    expect(reasonsInto("in_service", { ...all, firstBatch: { planned: true, inDisplay: false, quarantineDaysLeft: 12 } })).toEqual(["The first batch is in quarantine: 12 days left."]);
+    expect(reasonsInto("in_service", { ...all, firstBatch: { planned: true, inDisplay: false, quarantineDaysLeft: 0 } })).toEqual([
+      "The first batch has finished quarantine; add it to the display.",
+    ]);
+    expect(reasonsInto("in_service", all)).toEqual([]);
   });
 
   it("checks every gate on a jump, labelling each by stage", () => {

@@ -11,7 +11,7 @@ const none: GateFacts = {
   aquascapeChecklist: { total: 0, done: 0 },
   leak: { filled: false, after24hPassed: null },
   cycle: null,
-  stockingBatches: 0,
+  firstBatch: { planned: false, inDisplay: false, quarantineDaysLeft: null },
   deposit: "not_required",
 };
 
@@ -38,7 +38,7 @@ describe("gates: every reason in full", () => {
       "The cycle isn't finished yet.",
     ]);
     expect(reasonsInto("first_stocking", { ...none, cycle: { ready: true, reasons: [] } })).toEqual([]);
-    expect(reasonsInto("in_service", none)).toEqual(["No fish have been recorded yet; record the first batch."]);
+    expect(reasonsInto("in_service", none)).toEqual(["There is no stocking plan yet; the lead plans the first batch under Fish."]);
   });
 
   it("a one-stage move gives the reasons as they are; a jump labels each with its stage", () => {

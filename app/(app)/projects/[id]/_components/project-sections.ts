@@ -7,6 +7,7 @@ const SECTIONS: { path: string; label: string; roles: Role[] }[] = [
   { path: "/survey", label: "Site & load", roles: ["lead", "crew"] },
   { path: "/install", label: "Install day", roles: ["lead", "crew"] },
   { path: "/water", label: "Water & cycling", roles: ["lead", "crew", "client"] },
+  { path: "/fish", label: "Fish", roles: ["lead", "crew", "client"] },
   { path: "/photos", label: "Photos", roles: ["lead", "crew", "client"] },
   { path: "/talk", label: "Messages & notes", roles: ["lead", "crew", "client"] },
   { path: "/visits", label: "Visits", roles: ["lead", "crew"] },

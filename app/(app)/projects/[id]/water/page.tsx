@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { requirePageUser } from "@/server/session";
 import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { getCycleEvaluation, getCycleStartedAt } from "@/db/queries/cycle-state";
@@ -102,7 +103,17 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
       <ReadingsTable projectId={project.id} rows={tests.map(toReadingView)} unitSystem={unitSystem} canVoid={canVoid} takeBack={takeBack} />
 
       {(fishStage || batches.length > 0) && (
-        <StockingPanel projectId={project.id} batches={batches.map(toBatchView)} canRecord={canStock && fishStage} isLead={user.role === "lead"} />
+        <>
+          {/* Fish go in through the stocking plan on the Fish tab, after quarantine; this panel shows the batches and their re-tests. */}
+          <StockingPanel projectId={project.id} batches={batches.map(toBatchView)} canRecord={false} isLead={user.role === "lead"} />
+          {canStock && fishStage && (
+            <p className="-mt-4 text-sm">
+              <Link href={`/projects/${project.id}/fish`} className="text-accent underline">
+                Plan, quarantine and add fish on the Fish tab
+              </Link>
+            </p>
+          )}
+        </>
       )}
 
       {canDose && <DosePanel projectId={project.id} doses={doses.map(toDoseView)} designVolume={volume} unitSystem={unitSystem} canVoid={canVoid} />}

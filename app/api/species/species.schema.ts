@@ -1,0 +1,36 @@
+import { z } from "zod";
+import { optionalNumber, requiredNumber } from "@/lib/validation/number";
+import { DIETS, SWIM_LEVELS, TEMPERAMENTS, WATER_KINDS } from "@/lib/stocking/species";
+
+const yesNo = (message: string) => z.preprocess((v) => (v === "" || v === undefined ? null : v === "true" ? true : v === "false" ? false : v), z.boolean({ message }).nullable());
+const flag = z.preprocess((v) => v === true || v === "true" || v === "on", z.boolean());
+
+/** A catalogue entry as the lead edits it; temperatures °C, lengths mm. */
+export const speciesSchema = z
+  .object({
+    commonName: z.string({ message: "Enter the common name." }).trim().min(2, "Enter the common name.").max(80, "Keep it under 80 characters."),
+    scientificName: z.string({ message: "Enter the scientific name." }).trim().regex(/^[A-Z][a-z]+ [a-z.-]+( [a-z.-]+)?$/, "Write it as genus and species, e.g. Genus species."),
+    water: z.enum(WATER_KINDS, { message: "Choose fresh, brackish or salt water." }),
+    tempMinC: requiredNumber("Enter the lowest temperature.").pipe(z.number().min(0, "Below 0 °C isn't believable.").max(40, "Above 40 °C isn't believable.")),
+    tempMaxC: requiredNumber("Enter the highest temperature.").pipe(z.number().min(0, "Below 0 °C isn't believable.").max(40, "Above 40 °C isn't believable.")),
+    phMin: requiredNumber("Enter the lowest pH.").pipe(z.number().min(4, "pH below 4 isn't a fish tank.").max(10, "pH above 10 isn't a fish tank.")),
+    phMax: requiredNumber("Enter the highest pH.").pipe(z.number().min(4, "pH below 4 isn't a fish tank.").max(10, "pH above 10 isn't a fish tank.")),
+    adultLengthMm: requiredNumber("Enter the adult length in mm.").pipe(z.number().int("Whole millimetres.").min(5, "At least 5 mm.").max(3000, "Over 3 m: check the units (millimetres).")),
+    temperament: z.enum(TEMPERAMENTS, { message: "Choose a temperament." }),
+    territorial: flag,
+    shoalMin: requiredNumber("Enter the smallest group (1 if kept alone).").pipe(z.number().int("A whole number.").min(1, "At least 1.").max(100, "Over 100 isn't believable.")),
+    level: z.enum(SWIM_LEVELS, { message: "Choose where it swims." }),
+    coralSafe: yesNo("Say whether it is safe with corals."),
+    invertSafe: yesNo("Say whether it is safe with invertebrates."),
+    diet: z.enum(DIETS, { message: "Choose a diet." }),
+    minTankLengthMm: optionalNumber("Minimum tank length must be a number of mm.").pipe(z.number().int("Whole millimetres.").min(100, "At least 100 mm.").max(10_000, "Over 10 m: check the units.").nullable()),
+    notes: z.string().trim().max(1000, "Keep notes under 1,000 characters.").optional().nullable().transform((v) => (v ? v : null)),
+    source: z.string({ message: "Say where the values come from." }).trim().min(3, "Say where the values come from: \"from memory\" or the handbook's name.").max(200, "Keep it under 200 characters."),
+  })
+  .superRefine((v, ctx) => {
+    if (v.tempMinC > v.tempMaxC) ctx.addIssue({ code: "custom", path: ["tempMaxC"], message: "The highest temperature is below the lowest." });
+    if (v.phMin > v.phMax) ctx.addIssue({ code: "custom", path: ["phMax"], message: "The highest pH is below the lowest." });
+  });
+
+export type SpeciesInput = z.input<typeof speciesSchema>;
+export type SpeciesValues = z.output<typeof speciesSchema>;
