@@ -8,3 +8,4 @@ export * from "./schema/checklists";
 export * from "./schema/water";
 export * from "./schema/talk";
 export * from "./schema/visits";
+export * from "./schema/sign-in-limits";
