@@ -65,7 +65,8 @@ for (const { role, email } of ROLES) {
       await ready(page);
     }
     await signIn(page, email);
-    await expect(page.getByTestId("signed-in-as")).toBeVisible();
+    // Checking the password takes a moment by design (scrypt); a loaded machine can stretch it.
+    await expect(page.getByTestId("signed-in-as")).toBeVisible({ timeout: 30_000 });
 
     for (const route of routes) {
       const res = await page.goto(route);
