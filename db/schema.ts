@@ -8,4 +8,5 @@ export * from "./schema/checklists";
 export * from "./schema/water";
 export * from "./schema/talk";
 export * from "./schema/visits";
+export * from "./schema/test-kits";
 export * from "./schema/sign-in-limits";

@@ -23,7 +23,7 @@ const random = () => {
   return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
 };
 const pick = <T>(list: readonly T[]) => list[Math.floor(random() * list.length)];
-const TOWNS = ["Eastmere", "Larkmoor", "Brindle Bay", "Westcombe", "Holloway Cross", "Fennick", "Orrin Vale", "Saltby"];
+const TOWNS = ["Quillhaven", "Larkwhistle", "Tessling Bay", "Orrowfen", "Brackenfold Cross", "Fennick", "Dunnaby Vale", "Wickerly Fen"];
 const ROOMS = ["lounge", "hallway", "office", "kitchen", "reception", "study", "dining-room", "waiting-room"];
 const KINDS = ["reef", "planted", "cichlid", "community", "shrimp", "paludarium"];
 const FIRST = ["Ada", "Bram", "Cleo", "Dov", "Esme", "Finn", "Gala", "Hugo", "Ines", "Jory", "Kit", "Lune"];

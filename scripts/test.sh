@@ -6,13 +6,14 @@
 #   npm test -- --unit                        types and unit tests only (no services)
 #   npm test -- --integration [files…]        integration tests (all, or the files named)
 #   npm test -- --e2e [files…]                browser tests (all, or the files named)
+#   npm test -- --screens                     screenshots of the main screens into docs/screens
 # Environment: TEST_SLOT=N runs on its own ports, cluster and build folder, so several runs can
 # share a machine; SKIP_BUILD=1 reuses the last build of that slot; SKIP_TYPES=1 skips tsc;
 # SKIP_LINT=1 skips ESLint (which runs with the unit tests).
 set -euo pipefail
 source "$(dirname "$0")/lib/common.sh"
 
-want_unit=1 want_int=1 want_e2e=1
+want_unit=1 want_int=1 want_e2e=1 want_screens=0
 int_files=() e2e_files=()
 if [ $# -gt 0 ]; then
   want_unit=0 want_int=0 want_e2e=0
@@ -22,6 +23,7 @@ if [ $# -gt 0 ]; then
       --unit) want_unit=1; target="" ;;
       --integration) want_int=1; target=int ;;
       --e2e) want_e2e=1; target=e2e ;;
+      --screens) want_screens=1; target="" ;;
       *) if [ "$target" = int ]; then int_files+=("$arg"); elif [ "$target" = e2e ]; then e2e_files+=("$arg"); else echo "Unknown argument: $arg" >&2; exit 2; fi ;;
     esac
   done
@@ -58,9 +60,9 @@ if [ "$want_unit" = 1 ]; then
   node node_modules/vitest/vitest.mjs run --project unit
 fi
 
-[ "$want_int" = 1 ] || [ "$want_e2e" = 1 ] || { echo "All tests passed."; exit 0; }
+[ "$want_int" = 1 ] || [ "$want_e2e" = 1 ] || [ "$want_screens" = 1 ] || { echo "All tests passed."; exit 0; }
 
-if [ "$want_e2e" = 1 ] && [ ! -x /usr/bin/chromium ]; then
+if { [ "$want_e2e" = 1 ] || [ "$want_screens" = 1 ]; } && [ ! -x /usr/bin/chromium ]; then
   echo "== installing Debian's Chromium for browser tests"
   sudo=""
   [ "$(id -u)" -eq 0 ] || sudo=sudo
@@ -92,6 +94,11 @@ CHILD_PIDS+=($!)
 CHILD_PIDS+=($!)
 wait_http "http://127.0.0.1:$PORT/api/health" 60
 
+# Screens first, while the database holds only the demo.
+if [ "$want_screens" = 1 ]; then
+  echo "== screens"
+  node node_modules/@playwright/test/cli.js test -c playwright.screens.config.ts
+fi
 if [ "$want_int" = 1 ]; then
   echo "== integration"
   node node_modules/vitest/vitest.mjs run --project integration "${int_files[@]}"

@@ -1,20 +1,23 @@
 "use client";
 import { useCallback, useEffect, useId, useMemo, useRef, useState } from "react";
 import useSWR from "swr";
-import { DndContext, DragOverlay, KeyboardSensor, PointerSensor, TouchSensor, closestCorners, useSensor, useSensors, type DragEndEvent, type DragStartEvent } from "@dnd-kit/core";
-import { arrayMove, sortableKeyboardCoordinates } from "@dnd-kit/sortable";
+import { DndContext, DragOverlay, KeyboardSensor, MouseSensor, TouchSensor, useSensor, useSensors, type DragEndEvent, type DragStartEvent } from "@dnd-kit/core";
 import type { BoardCard as Card, BoardData } from "@/db/queries/board";
 import type { Role } from "@/lib/auth/roles";
-import { STAGES, STAGE_LABELS, isStage, stageIndex, type Stage } from "@/lib/stages/stages";
-import { compareKeys, keyBetween, type Placement } from "@/lib/stages/ordering";
+import { STAGES, STAGE_LABELS, stageIndex, type Stage } from "@/lib/stages/stages";
+import { compareKeys } from "@/lib/stages/ordering";
+import { skippedStages } from "@/lib/stages/skipped";
 import { filtersToQuery, matchesFilters, type BoardFilters as Filters } from "@/lib/stages/board-filters";
 import { sendJson } from "@/lib/http/send-json";
 import { boardAnnouncements } from "./announcements";
 import { BoardColumn } from "./board-column";
 import { BoardFilters } from "./board-filters";
 import { MoveReasonDialog, type ReasonRequest } from "./move-reason-dialog";
-
-type PlannedMove = { card: Card; toStage: Stage; placement: Placement; localPosition: string };
+import { MoveToDialog } from "./move-to-dialog";
+import { SkipDialog } from "./skip-dialog";
+import { StageSwitcher } from "./stage-switcher";
+import { boardCollisions, boardKeyboardCoordinates } from "./collisions";
+import { planOnCard, planToEnd, stageOfTarget, type PlannedMove } from "./plan-move";
 type MoveAnswer = { stage: Stage; position: string; version: number; stageEnteredAt: string };
 
 async function fetchBoard(url: string): Promise<BoardData> {
@@ -23,7 +26,16 @@ async function fetchBoard(url: string): Promise<BoardData> {
   return res.json();
 }
 
-/** The install board: a column per stage, cards moved by pointer, touch or keyboard. */
+/** A touch on the wave handle drags at once; anywhere else on a card it waits for a long press. */
+const onHandle = ({ event }: { event: Event }) => event.target instanceof Element && event.target.closest("[data-move-handle]") !== null;
+
+/**
+ * Auto-scroll while dragging, kept gentle: only near the very edge and slowly, so a card dragged
+ * towards the next column isn't carried past it.
+ */
+const AUTO_SCROLL = { threshold: { x: 0.06, y: 0.12 }, acceleration: 2, interval: 8 };
+
+/** The install board: a column per stage (one at a time on a phone), cards moved by mouse, touch, keyboard or "Move to…". */
 export function Board({ initial, role, initialFilters, nowIso }: { initial: BoardData; role: Role; initialFilters: Filters; nowIso: string }) {
   const dndId = useId();
   const dragging = useRef(false);
@@ -33,7 +45,10 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
   const [status, setStatus] = useState<string | null>(null);
   const [saving, setSaving] = useState<string | null>(null);
   const [ask, setAsk] = useState<{ request: ReasonRequest; move: PlannedMove } | null>(null);
+  const [skip, setSkip] = useState<PlannedMove | null>(null);
+  const [moveTo, setMoveTo] = useState<Card | null>(null);
   const [activeId, setActiveId] = useState<string | null>(null);
+  const [phoneStage, setPhoneStage] = useState<Stage>(() => initial.cards.find((c) => matchesFilters(c, initialFilters, new Date(nowIso)))?.stage ?? STAGES[0]);
   const now = useMemo(() => new Date(nowIso), [nowIso]);
 
   useEffect(() => {
@@ -47,12 +62,13 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
     for (const s of STAGES) out[s].sort(compareKeys);
     return out;
   }, [visible]);
+  const counts = useMemo(() => Object.fromEntries(STAGES.map((s) => [s, columns[s].length])) as Record<Stage, number>, [columns]);
   const byId = useCallback((id: string) => data.cards.find((c) => c.id === id) ?? null, [data.cards]);
 
   const sensors = useSensors(
-    useSensor(PointerSensor, { activationConstraint: { distance: 5 } }),
-    useSensor(TouchSensor, { activationConstraint: { delay: 200, tolerance: 6 } }),
-    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
+    useSensor(MouseSensor, { activationConstraint: { distance: 5 } }),
+    useSensor(TouchSensor, { activationConstraint: { delay: 250, tolerance: 8 }, bypassActivationConstraint: onHandle }),
+    useSensor(KeyboardSensor, { coordinateGetter: boardKeyboardCoordinates }),
   );
 
   const announcements = useMemo(() => {
@@ -63,10 +79,8 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
       return { title: c.title, stage: c.stage, index: Math.max(0, col.findIndex((x) => x.id === id)), count: col.length };
     };
     const overLabel = (overId: string, active: string) => {
-      if (overId.startsWith("column:")) {
-        const stage = overId.slice(7);
-        return isStage(stage) ? `${STAGE_LABELS[stage]}, at the end` : null;
-      }
+      const stage = stageOfTarget(overId);
+      if (stage !== undefined) return stage ? `${STAGE_LABELS[stage]}, at the end` : null;
       const o = byId(overId);
       if (!o) return null;
       const col = columns[o.stage];
@@ -109,51 +123,32 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
     setActiveId(String(e.active.id));
   }
 
+  /** Moves back ask why; moves that jump a stage ask first; the rest go straight to the server. */
+  function decide(move: PlannedMove | null) {
+    if (!move) return;
+    const { card, toStage } = move;
+    if (stageIndex(toStage) < stageIndex(card.stage)) {
+      setAsk({ move, request: { kind: "back", title: card.title, toLabel: STAGE_LABELS[toStage], reasons: [] } });
+      return;
+    }
+    if (skippedStages(card.stage, toStage).length) {
+      setSkip(move);
+      return;
+    }
+    void perform(move);
+  }
+
   function onDragEnd({ active, over }: DragEndEvent) {
     dragging.current = false;
     setActiveId(null);
     const card = byId(String(active.id));
     if (!card || !over) return;
     const overId = String(over.id);
-    let toStage: Stage;
-    let list: Card[];
-    let index: number;
-    if (overId.startsWith("column:")) {
-      const s = overId.slice(7);
-      if (!isStage(s)) return;
-      toStage = s;
-      list = columns[s].filter((c) => c.id !== card.id);
-      index = list.length;
-      if (s === card.stage && columns[s].at(-1)?.id === card.id) return;
-    } else {
-      const target = byId(overId);
-      if (!target) return;
-      toStage = target.stage;
-      const full = columns[toStage];
-      if (toStage === card.stage) {
-        const from = full.findIndex((c) => c.id === card.id);
-        const to = full.findIndex((c) => c.id === overId);
-        if (from === to) return;
-        list = arrayMove(full, from, to).filter((c) => c.id !== card.id);
-        index = to;
-      } else {
-        list = full;
-        index = full.findIndex((c) => c.id === overId);
-      }
-    }
-    const placement: Placement = list[index] ? { beforeId: list[index].id } : list[index - 1] ? { afterId: list[index - 1].id } : {};
-    let localPosition = card.position;
-    try {
-      localPosition = keyBetween(list[index - 1]?.position ?? null, list[index]?.position ?? null);
-    } catch {
-      // The server places it; the local key only orders the optimistic view.
-    }
-    const move = { card, toStage, placement, localPosition };
-    if (stageIndex(toStage) < stageIndex(card.stage)) {
-      setAsk({ move, request: { kind: "back", title: card.title, toLabel: STAGE_LABELS[toStage], reasons: [] } });
-      return;
-    }
-    void perform(move);
+    const stage = stageOfTarget(overId);
+    if (stage === null) return;
+    if (stage) return decide(planToEnd(card, stage, columns));
+    const target = byId(overId);
+    if (target) decide(planOnCard(card, target, columns));
   }
 
   const active = activeId ? byId(activeId) : null;
@@ -166,8 +161,9 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
       <DndContext
         id={dndId}
         sensors={sensors}
-        collisionDetection={closestCorners}
+        collisionDetection={boardCollisions}
         accessibility={{ announcements, screenReaderInstructions: { draggable: "To move a card, press Space. Use the arrow keys to choose a column and place, Space to drop it there, or Escape to put it back." } }}
+        autoScroll={AUTO_SCROLL}
         onDragStart={onDragStart}
         onDragEnd={onDragEnd}
         onDragCancel={() => {
@@ -175,12 +171,13 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
           setActiveId(null);
         }}
       >
-        <div className="flex gap-3 overflow-x-auto pb-4" data-testid="board">
+        <StageSwitcher counts={counts} chosen={phoneStage} onChoose={setPhoneStage} />
+        <div className="flex gap-2 pb-4 md:overflow-x-auto" data-testid="board">
           {STAGES.map((s) => (
-            <BoardColumn key={s} stage={s} cards={columns[s]} now={now} errors={errors} saving={saving} />
+            <BoardColumn key={s} stage={s} cards={columns[s]} now={now} errors={errors} saving={saving} shownOnPhone={s === phoneStage} onMoveTo={setMoveTo} />
           ))}
         </div>
-        <DragOverlay>{active ? <div className="w-60 rounded-lg border border-accent bg-card p-2.5 text-sm font-semibold shadow-lg">{active.title}</div> : null}</DragOverlay>
+        <DragOverlay>{active ? <div className="w-56 rounded-lg border border-accent bg-card p-2.5 text-sm font-semibold shadow-lg">{active.title}</div> : null}</DragOverlay>
       </DndContext>
       {ask && (
         <MoveReasonDialog
@@ -193,6 +190,35 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
             const { move, request } = ask;
             setAsk(null);
             void perform(move, request.kind === "back" ? { reason } : { overrideReason: reason });
+          }}
+        />
+      )}
+      {moveTo && (
+        <MoveToDialog
+          title={moveTo.title}
+          from={moveTo.stage}
+          onCancel={() => setMoveTo(null)}
+          onChoose={(to) => {
+            const card = moveTo;
+            setMoveTo(null);
+            decide(planToEnd(card, to, columns));
+          }}
+        />
+      )}
+      {skip && (
+        <SkipDialog
+          title={skip.card.title}
+          from={skip.card.stage}
+          to={skip.toStage}
+          skipped={skippedStages(skip.card.stage, skip.toStage)}
+          onCancel={() => {
+            setStatus(`${skip.card.title} stayed in ${STAGE_LABELS[skip.card.stage]}.`);
+            setSkip(null);
+          }}
+          onConfirm={() => {
+            const move = skip;
+            setSkip(null);
+            void perform(move);
           }}
         />
       )}

@@ -4,7 +4,7 @@ import { db } from "../index";
 import { projectCrew, projects } from "../schema";
 import { canOnProject, canSeeProject, type ProjectAction, type Relation } from "../../lib/auth/permissions";
 import { forbidden, notFound } from "../../server/errors";
-import { parseId } from "../../server/route";
+import { parseId } from "../../server/ids";
 import type { SessionUser } from "../../server/session";
 
 export type ProjectRow = typeof projects.$inferSelect;

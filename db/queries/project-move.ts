@@ -8,7 +8,6 @@ import { checkGate, moveDirection, needsCycleFacts } from "../../lib/stages/gate
 import { keyForPlacement, type Placement } from "../../lib/stages/ordering";
 import { stageIndex, type Stage } from "../../lib/stages/stages";
 import { AppError, badRequest, conflict, forbidden, notFound, unprocessable } from "../../server/errors";
-import type { SessionUser } from "../../server/session";
 
 export const STALE_MESSAGE = "Someone else moved or changed this card; the board has been refreshed.";
 
@@ -29,8 +28,8 @@ export const COLUMN_LOCK_SPACE = 7301;
  * between its neighbours as they are now (under a per-column lock, so concurrent drops into one
  * column get distinct keys), records the stage change and queues its notices, all in one transaction.
  */
-export async function moveProject(projectId: string, input: MoveInput, user: Pick<SessionUser, "id" | "role">, now = new Date()): Promise<MoveResult> {
-  if (input.overrideReason && user.role !== "lead") {
+export async function moveProject(projectId: string, input: MoveInput, user: { id: string; canOverride: boolean }, now = new Date()): Promise<MoveResult> {
+  if (input.overrideReason && !user.canOverride) {
     throw forbidden("Only the lead can pass a closed gate. Finish what the gate asks for, or ask the lead.");
   }
   if (input.beforeId === projectId || input.afterId === projectId) throw badRequest("A card can't be placed next to itself.", { beforeId: "Choose another card." });
@@ -55,9 +54,9 @@ export async function moveProject(projectId: string, input: MoveInput, user: Pic
       const gate = checkGate({ from, to, facts });
       if (!gate.open) {
         if (!input.overrideReason) {
-          throw unprocessable(user.role === "lead" ? "The gate is closed. Give a reason to pass it anyway, or finish what it asks for." : "The gate is closed. Finish what it asks for, or ask the lead.", {
+          throw unprocessable(user.canOverride ? "The gate is closed. Give a reason to pass it anyway, or finish what it asks for." : "The gate is closed. Finish what it asks for, or ask the lead.", {
             reasons: gate.reasons,
-            canOverride: user.role === "lead",
+            canOverride: user.canOverride,
           });
         }
         override = true;

@@ -64,13 +64,14 @@ function reTestReason(reTest: ReTest): string {
  */
 export async function addStockingBatch(opts: {
   projectId: string;
-  user: { id: string; role: string };
+  /** `canOverride` comes from the permission table (canOnProject "override_gate"). */
+  user: { id: string; canOverride: boolean };
   values: { addedAt: Date; description: string; fishCount: number; quarantineDays: number | null; overrideReason: string | null };
   now?: Date;
 }) {
   const { projectId, user, values } = opts;
   const now = opts.now ?? new Date();
-  if (values.overrideReason && user.role !== "lead") throw forbidden("Only the lead can add fish past the re-test rule.");
+  if (values.overrideReason && !user.canOverride) throw forbidden("Only the lead can add fish past the re-test rule.");
   return db().transaction(async (tx) => {
     const project = await lockProject(tx, projectId);
     if (project.stage !== "first_stocking" && project.stage !== "in_service") {
@@ -93,7 +94,7 @@ export async function addStockingBatch(opts: {
     }
     if (reasons.length && !values.overrideReason) {
       const head = previous ? "The next batch has to wait." : "The first batch has to wait for the cycle.";
-      throw unprocessable(`${head} ${reasons.join(" ")}`, { reasons, canOverride: user.role === "lead" });
+      throw unprocessable(`${head} ${reasons.join(" ")}`, { reasons, canOverride: user.canOverride });
     }
     const [row] = await tx
       .insert(stockingBatches)

@@ -11,7 +11,7 @@ export const DEMO_PEOPLE = [
   { key: "amara", name: "Amara Quist", email: "amara@client.test", role: "client", phone: "+44 7700 900502" },
   { key: "wen", name: "Wen Aldous", email: "wen@client.test", role: "client", phone: "+44 7700 900503" },
   { key: "odile", name: "Odile Marchetti", email: "odile@client.test", role: "client", phone: "+44 7700 900504" },
-  { key: "rafe", name: "Rafe Ashdown (Ashdown Dental)", email: "rafe@client.test", role: "client", phone: "+44 7700 900505" },
+  { key: "rafe", name: "Rafe Ashdown (Orrowfen Dental Rooms)", email: "rafe@client.test", role: "client", phone: "+44 7700 900505" },
 ] as const;
 
 export type DemoPersonKey = (typeof DEMO_PEOPLE)[number]["key"];

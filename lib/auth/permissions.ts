@@ -19,12 +19,29 @@ export type ProjectAction =
   | "upload_photo"
   | "write_note"
   | "send_message"
-  | "edit_details";
+  | "edit_details"
+  // The install team's own view: the board card, internal notes, the checklist, materials and leak checks.
+  | "view_internal"
+  // Filing photos on any stage, and finishing another person's upload (a client's photo is always a problem photo).
+  | "file_stage_photos"
+  | "finish_others_upload";
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
 // Everything not listed for crew or clients is the lead's alone.
-const CREW: ProjectAction[] = ["view", "move", "edit_survey", "tick_checklist", "log_water_test", "log_dose", "record_stocking", "upload_photo", "send_message"];
+const CREW: ProjectAction[] = [
+  "view",
+  "view_internal",
+  "move",
+  "edit_survey",
+  "tick_checklist",
+  "log_water_test",
+  "log_dose",
+  "record_stocking",
+  "upload_photo",
+  "file_stage_photos",
+  "send_message",
+];
 const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message"];
 
 /** True when the caller can see the project at all (else it answers 404, not 403). */

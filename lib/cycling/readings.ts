@@ -1,3 +1,5 @@
+import { NEUTRAL_KIT_STEPS } from "./test-kits";
+
 /**
  * Water tests and ammonia doses as staff enter them during a tank's cycle,
  * plus the plausibility checks run before a reading is saved.
@@ -38,15 +40,11 @@ export interface AmmoniaDose {
 export type Analyte = "ammonia" | "nitrite" | "nitrate";
 
 /**
- * Colour-card steps (mg/L) typical of hobby test kits, for pickers and for
- * judging what counts as a real change. Common practice, from memory; kits
- * differ, so nothing here snaps or rejects values that fall between steps.
+ * Quick-pick steps (mg/L) offered when the company has described no kit of its own: our neutral,
+ * evenly spaced defaults (NEUTRAL_KIT_STEPS in ./test-kits). Nothing snaps or rejects values that
+ * fall between steps.
  */
-export const kitSteps: Readonly<Record<Analyte, readonly number[]>> = {
-  ammonia: [0, 0.25, 0.5, 1, 2, 4, 8],
-  nitrite: [0, 0.25, 0.5, 1, 2, 5],
-  nitrate: [0, 5, 10, 20, 40, 80, 160],
-};
+export const kitSteps: Readonly<Record<Analyte, readonly number[]>> = NEUTRAL_KIT_STEPS;
 
 /** A reading as entered, before it has an id. */
 export type ReadingInput = Omit<WaterTest, "id" | "voided">;

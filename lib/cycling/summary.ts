@@ -5,17 +5,23 @@
 
 import { DAY_MS, firstValueSince, latestValue, prepareHistory } from "./cycle-history";
 import type { CycleEvaluation } from "./evaluate-cycle";
-import { kitSteps, type Analyte, type WaterTest } from "./readings";
+import type { Analyte, WaterTest } from "./readings";
 import { countWord } from "./wording";
 
 /** Direction of one analyte over recent days. */
 export type Trend = "rising" | "falling" | "steady" | "unknown";
 
+/**
+ * Changes smaller than these are within what one reading can tell apart, so they don't count as a
+ * trend (common practice, from memory; independent of the kit a project uses).
+ */
+export const SMALLEST_TREND_CHANGE_MGL: Readonly<Record<Analyte, number>> = Object.freeze({ ammonia: 0.25, nitrite: 0.25, nitrate: 5 });
+
 /** Options for describeTrend. */
 export interface TrendOptions {
   /** How far back from the newest test of that analyte to look. Default 7 days. */
   days?: number;
-  /** Smallest change that counts. Default: the analyte's smallest non-zero kit step (kitSteps). */
+  /** Smallest change that counts. Default: SMALLEST_TREND_CHANGE_MGL for the analyte. */
   minChangeMgL?: number;
 }
 
@@ -26,7 +32,7 @@ export interface TrendOptions {
  */
 export function describeTrend(readings: readonly WaterTest[], analyte: Analyte, options: TrendOptions = {}): Trend {
   const days = options.days ?? 7;
-  const minChange = options.minChangeMgL ?? kitSteps[analyte][1];
+  const minChange = options.minChangeMgL ?? SMALLEST_TREND_CHANGE_MGL[analyte];
   const h = prepareHistory(readings);
   const last = latestValue(h, analyte);
   if (!last) return "unknown";

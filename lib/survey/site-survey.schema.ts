@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text as cleanText } from "../validation/text";
 
 /**
  * The site survey, stored whole in `site_surveys.data` as SI values (millimetres). Every field is
@@ -37,7 +38,7 @@ function choice<T extends readonly [string, ...string[]]>(values: T, message: st
   return z.enum(values, { error: message }).nullish();
 }
 
-const text = (max: number) => z.string().trim().max(max, `Keep this under ${max} characters.`).nullish();
+const text = (max: number) => cleanText(max, `Keep this under ${max} characters.`).nullish();
 
 export const siteSurveySchema = z.object({
   // Room and floor

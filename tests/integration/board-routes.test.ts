@@ -12,7 +12,7 @@ describe("who may use the board's routes", () => {
     const s = await signedIn(t.client);
     const own = t.project.id;
     expect((await s.get("/api/projects")).status).toBe(403);
-    expect((await s.post("/api/projects", {})).status).toBe(400);
+    expect((await s.post("/api/projects", {})).status).toBe(403);
     expect((await s.get(`/api/projects/${own}`)).status).toBe(403);
     expect((await s.patch(`/api/projects/${own}`, { version: 1, title: "Mine now" })).status).toBe(403);
     expect((await s.post(`/api/projects/${own}/move`, { toStage: "aquascape", version: 1 })).status).toBe(403);

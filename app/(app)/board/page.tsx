@@ -7,7 +7,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { buttonStyles } from "@/components/ui/button-styles";
 import { Board } from "@/components/board/board";
 
-export const metadata: Metadata = { title: "Board" };
+export const metadata: Metadata = { title: "Installs" };
 
 export default async function BoardPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser("lead", "crew");
@@ -21,7 +21,7 @@ export default async function BoardPage({ searchParams }: { searchParams: Promis
   return (
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-center gap-3">
-        <h1 className="text-2xl font-bold tracking-tight">Install board</h1>
+        <h1 className="text-2xl font-bold tracking-tight">Installs by stage</h1>
         {user.role === "lead" && (
           <Link href="/projects/new" className={`${buttonStyles.primary} ml-auto`}>
             New project

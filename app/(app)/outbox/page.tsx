@@ -6,7 +6,7 @@ import { listUndelivered } from "@/db/queries/outbox";
 import { EmptyState } from "@/components/ui/empty-state";
 import { RetryAllButton } from "./retry-all-button";
 
-export const metadata: Metadata = { title: "Outbox" };
+export const metadata: Metadata = { title: "Mail going out" };
 export const dynamic = "force-dynamic";
 
 export default async function OutboxPage() {
@@ -14,7 +14,7 @@ export default async function OutboxPage() {
   const rows = await listUndelivered(db());
   return (
     <div className="mx-auto flex max-w-4xl flex-col gap-4">
-      <h1 className="text-2xl font-bold tracking-tight">Outbox</h1>
+      <h1 className="text-2xl font-bold tracking-tight">Mail going out</h1>
       <p className="text-sm text-muted">
         E-mails wait here until the mail server accepts them. Nothing is lost while it is down: each is retried with growing pauses, and you can try again now.
       </p>

@@ -12,7 +12,7 @@ import { WaterWords } from "./_components/water-words";
 import { ClientActions } from "./_components/client-actions";
 import { NextStep } from "./_components/next-step";
 
-export const metadata: Metadata = { title: "My projects" };
+export const metadata: Metadata = { title: "Your tanks" };
 export const dynamic = "force-dynamic";
 
 export default async function PortalPage() {

@@ -1,8 +1,9 @@
 import { z } from "zod";
+import { exactText, text } from "@/lib/validation/text";
 
 export const signInSchema = z.object({
-  email: z.string().trim().min(1, "Enter your e-mail address.").max(320).email("That doesn't look like an e-mail address."),
-  password: z.string().min(1, "Enter your password.").max(200, "That password is too long."),
+  email: text(320).min(1, "Enter your e-mail address.").pipe(z.email("That doesn't look like an e-mail address.")),
+  password: exactText(200, "That password is too long.").min(1, "Enter your password."),
 });
 
 export type SignInInput = z.infer<typeof signInSchema>;

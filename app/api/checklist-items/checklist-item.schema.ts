@@ -1,9 +1,10 @@
 import { z } from "zod";
+import { text } from "@/lib/validation/text";
 import { STAGES } from "@/lib/stages/stages";
 
 export const measureSchema = z
   .object({
-    unit: z.string().trim().min(1, "Give the unit, e.g. mm per m.").max(20, "Keep the unit short."),
+    unit: text(20, "Keep the unit short.").min(1, "Give the unit, e.g. mm per m."),
     min: z.number({ error: "Enter the lowest allowed value." }).finite(),
     max: z.number({ error: "Enter the highest allowed value." }).finite(),
   })
@@ -11,8 +12,8 @@ export const measureSchema = z
 
 export const newChecklistItemSchema = z.object({
   stage: z.enum(STAGES, { error: "Choose a stage." }),
-  label: z.string().trim().min(3, "Say what to check, in a few words.").max(200, "Keep it under 200 characters."),
-  hint: z.string().trim().max(500, "Keep the hint under 500 characters.").optional().nullable(),
+  label: text(200, "Keep it under 200 characters.").min(3, "Say what to check, in a few words."),
+  hint: text(500, "Keep the hint under 500 characters.").optional().nullable(),
   needsPhoto: z.boolean().default(false),
   measure: measureSchema.nullable().default(null),
 });

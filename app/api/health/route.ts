@@ -1,8 +1,7 @@
 import { NextResponse } from "next/server";
+import { publicRoute } from "@/server/route";
 
 export const dynamic = "force-dynamic";
 
 /** Liveness for load balancers and the scripts that wait for the server. */
-export function GET() {
-  return NextResponse.json({ ok: true });
-}
+export const GET = publicRoute({}, () => NextResponse.json({ ok: true }));

@@ -1,18 +1,12 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { userRoute } from "@/server/route";
 import { inviteUser, listPeople } from "@/db/queries/users";
-import { inviteSchema } from "@/app/(app)/people/invite.schema";
+import { inviteSchema } from "./invite.schema";
 
-export const GET = route(async () => {
-  await requireUser("lead");
-  return NextResponse.json({ people: await listPeople() });
-});
+export const GET = userRoute({ roles: ["lead"] }, async () => NextResponse.json({ people: await listPeople() }));
 
 /** Adds a crew member or client and queues their invitation e-mail. */
-export const POST = route(async (req) => {
-  const input = await parseJson(req, inviteSchema);
-  const user = await requireUser("lead");
+export const POST = userRoute({ roles: ["lead"], schema: inviteSchema }, async ({ input, user }) => {
   const created = await inviteUser({ ...input, phone: input.phone || null }, user.id);
   return NextResponse.json({ id: created.id, name: created.name, email: created.email, role: created.role }, { status: 201 });
 });

@@ -1,23 +1,24 @@
 import { z } from "zod";
-import { DATE_PATTERN, UUID_PATTERN } from "@/lib/stages/ids";
+import { UUID_PATTERN } from "@/lib/stages/ids";
+import { dateOnlyOrEmpty, text } from "@/lib/validation/text";
 
 const id = (message: string) => z.string().regex(UUID_PATTERN, message);
-const optionalDate = z.string().refine((v) => v === "" || (DATE_PATTERN.test(v) && !Number.isNaN(Date.parse(v))), "Enter a date, or leave it empty.");
+const optionalDate = dateOnlyOrEmpty();
 
 /** A new project, from the lead's form; the client is an existing account or a new one to invite. */
 export const projectCreateSchema = z
   .object({
     clientMode: z.enum(["existing", "new"], { message: "Choose an existing client or add a new one." }),
-    clientId: z.string(),
-    clientName: z.string().trim().max(120, "Keep the name under 120 characters."),
-    clientEmail: z.string().trim().max(200, "Keep the e-mail under 200 characters."),
-    title: z.string().trim().min(2, "Give the project a title.").max(120, "Keep the title under 120 characters."),
-    siteAddress: z.string().trim().min(3, "Enter the site's street address.").max(200, "Keep the address under 200 characters."),
-    siteTown: z.string().trim().min(2, "Enter the site's town.").max(80, "Keep the town under 80 characters."),
+    clientId: text(40),
+    clientName: text(120, "Keep the name under 120 characters."),
+    clientEmail: text(200, "Keep the e-mail under 200 characters."),
+    title: text(120, "Keep the title under 120 characters.").min(2, "Give the project a title."),
+    siteAddress: text(200, "Keep the address under 200 characters.").min(3, "Enter the site's street address."),
+    siteTown: text(80, "Keep the town under 80 characters.").min(2, "Enter the site's town."),
     targetInstallDate: optionalDate,
-    leadId: z.string().refine((v) => v === "" || UUID_PATTERN.test(v), "Choose a lead from the list."),
+    leadId: text(40).refine((v) => v === "" || UUID_PATTERN.test(v), "Choose a lead from the list."),
     crewIds: z.array(id("Choose crew from the list.")).max(20, "At most 20 crew on one project."),
-    tankSummary: z.string().trim().max(200, "Keep the tank summary under 200 characters."),
+    tankSummary: text(200, "Keep the tank summary under 200 characters."),
   })
   .superRefine((v, ctx) => {
     if (v.clientMode === "existing" && !UUID_PATTERN.test(v.clientId)) ctx.addIssue({ code: "custom", path: ["clientId"], message: "Choose the client." });

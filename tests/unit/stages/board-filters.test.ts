@@ -5,7 +5,7 @@ const now = new Date("2026-06-15T10:00:00Z");
 const card: FilterableCard = {
   title: "Invented lounge reef",
   clientName: "Ada Invented",
-  siteTown: "Eastmere",
+  siteTown: "Quillhaven",
   stage: "aquascape",
   stageEnteredAt: "2026-06-10T10:00:00Z",
   targetInstallDate: "2026-07-01",
@@ -26,7 +26,7 @@ describe("board filters", () => {
     expect(matchesFilters(card, { person: card.leadId! }, now)).toBe(true);
     expect(matchesFilters(card, { person: card.crew[0].id }, now)).toBe(true);
     expect(matchesFilters(card, { person: "33333333-3333-4333-8333-333333333333" }, now)).toBe(false);
-    expect(matchesFilters(card, { q: "eastMERE" }, now)).toBe(true);
+    expect(matchesFilters(card, { q: "quillHAVEN" }, now)).toBe(true);
     expect(matchesFilters(card, { q: "ada" }, now)).toBe(true);
     expect(matchesFilters(card, { q: "nowhere" }, now)).toBe(false);
     expect(matchesFilters(card, { overdue: true }, now)).toBe(false);

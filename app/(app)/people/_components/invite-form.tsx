@@ -2,7 +2,7 @@
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { inviteSchema, type InviteInput } from "../invite.schema";
+import { inviteSchema, type InviteInput } from "@/app/api/people/invite.schema";
 import { useRouter } from "next/navigation";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";

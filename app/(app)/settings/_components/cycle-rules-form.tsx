@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { cycleRulesSchema, type CycleRulesInput, type CycleRulesValues } from "../cycle-rules.schema";
+import { cycleRulesSchema, type CycleRulesInput, type CycleRulesValues } from "@/app/api/settings/cycle-rules/cycle-rules.schema";
 import type { CycleRules } from "@/lib/cycling/cycle-rules";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { signIn } from "next-auth/react";
-import { acceptInvitationSchema, type AcceptInvitationInput } from "./accept-invitation.schema";
+import { acceptInvitationSchema, type AcceptInvitationInput } from "@/app/api/invitations/accept/accept-invitation.schema";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";

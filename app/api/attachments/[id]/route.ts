@@ -1,25 +1,26 @@
 import { NextResponse } from "next/server";
-import { parseId, route } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { z } from "zod";
+import { parseId, projectFor, userRoute } from "@/server/route";
 import { getAttachment } from "@/db/queries/attachments";
-import { notFound } from "@/server/errors";
+import { AppError, notFound } from "@/server/errors";
 import { presignGet } from "@/server/storage";
+
+const querySchema = z.object({ variant: z.enum(["full", "thumb"]).optional() });
 
 /**
  * Sends a person who may see the project to a short-lived signed link for the file or its preview.
  * Anyone else gets the same 404 as for a file that doesn't exist.
  */
-export const GET = route<{ id: string }>(async (req, { params }) => {
-  const user = await requireUser();
-  const a = await getAttachment(parseId((await params).id, "That file"));
+export const GET = userRoute<undefined, typeof querySchema, { id: string }>({ query: querySchema }, async ({ user, params, query }) => {
+  const a = await getAttachment(parseId(params.id, "That file"));
   if (!a || a.status !== "ready") throw notFound("That file");
   try {
-    await requireProject({ projectId: a.projectId, user, action: "view" });
-  } catch {
-    throw notFound("That file");
+    await projectFor(a.projectId, user, "view");
+  } catch (error) {
+    if (error instanceof AppError) throw notFound("That file");
+    throw error;
   }
-  const thumb = new URL(req.url).searchParams.get("variant") === "thumb" && a.thumbKey;
+  const thumb = query.variant === "thumb" && a.thumbKey;
   const url = thumb
     ? await presignGet(a.thumbKey!, { contentType: "image/webp" })
     : await presignGet(a.key, { contentType: a.contentType, fileName: a.fileName });

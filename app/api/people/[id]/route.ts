@@ -1,6 +1,5 @@
 import { NextResponse } from "next/server";
-import { route, parseId, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { parseId, userRoute } from "@/server/route";
 import { forgetAccount } from "@/server/account-cache";
 import { AppError } from "@/server/errors";
 import { setPersonAccess } from "@/db/queries/sessions";
@@ -11,13 +10,14 @@ import { personAccessSchema } from "./person-access.schema";
  * instances within a few seconds). A lead can't change their own access, so the company always
  * keeps someone who can undo a mistake.
  */
-export const PATCH = route<{ id: string }>(async (req, ctx) => {
-  const user = await requireUser("lead");
-  const id = parseId((await ctx.params).id, "That person");
-  const input = await parseJson(req, personAccessSchema);
-  if (id === user.id) throw new AppError(409, "You can't change your own role or deactivate yourself; ask another project lead.");
-  const person = await setPersonAccess(id, input);
-  if (!person) throw new AppError(404, "That person wasn't found.");
-  forgetAccount(id);
-  return NextResponse.json(person);
-});
+export const PATCH = userRoute<typeof personAccessSchema, undefined, { id: string }>(
+  { roles: ["lead"], schema: personAccessSchema },
+  async ({ input, user, params }) => {
+    const id = parseId(params.id, "That person");
+    if (id === user.id) throw new AppError(409, "You can't change your own role or deactivate yourself; ask another project lead.");
+    const person = await setPersonAccess(id, input);
+    if (!person) throw new AppError(404, "That person wasn't found.");
+    forgetAccount(id);
+    return NextResponse.json(person);
+  },
+);

@@ -1,28 +1,13 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { forbidden } from "@/server/errors";
-import { requireProject } from "@/db/queries/project-access";
+import { projectRoute } from "@/server/route";
 import { getProjectDetail, updateProjectDetails } from "@/db/queries/project-create";
 import { projectDetailsSchema } from "./project-details.schema";
 
-type Params = { id: string };
-
-/** One card's details for the board (lead and assigned crew). */
-export const GET = route<Params>(async (_req, { params }) => {
-  const { id } = await params;
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "view" });
-  if (user.role === "client") throw forbidden("The board is for the install team; your projects are under My projects.");
-  return NextResponse.json(await getProjectDetail(project.id));
-});
+/** One card's details for the board (lead and assigned crew; a client is sent to Your tanks). */
+export const GET = projectRoute({ action: "view_internal" }, async ({ project }) => NextResponse.json(await getProjectDetail(project.id)));
 
 /** Changes a project's details (lead only), guarded by the card's version. */
-export const PATCH = route<Params>(async (req, { params }) => {
-  const { id } = await params;
-  const input = await parseJson(req, projectDetailsSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "edit_details" });
+export const PATCH = projectRoute({ action: "edit_details", schema: projectDetailsSchema }, async ({ input, project }) => {
   const updated = await updateProjectDetails(project.id, input);
   return NextResponse.json({ id: updated.id, version: updated.version });
 });

@@ -1,15 +1,13 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { userRoute } from "@/server/route";
 import { badRequest, type FieldErrors } from "@/server/errors";
 import { getCompanyCycleRules } from "@/db/queries/cycle-state";
 import { saveCompanyCycleRules } from "@/db/queries/cycle-ready";
 import { DEFAULT_CYCLE_RULES, resolveCycleRules, validateCycleRules, type CycleRules } from "@/lib/cycling/cycle-rules";
-import { cycleRulesSchema } from "@/app/(app)/settings/cycle-rules.schema";
+import { cycleRulesSchema } from "./cycle-rules.schema";
 
 /** The company's overrides, the defaults, and the rules in force. Lead only. */
-export const GET = route(async () => {
-  await requireUser("lead");
+export const GET = userRoute({ roles: ["lead"] }, async () => {
   const overrides = await getCompanyCycleRules();
   return NextResponse.json({ overrides, defaults: DEFAULT_CYCLE_RULES, rules: resolveCycleRules(overrides) });
 });
@@ -18,9 +16,7 @@ export const GET = route(async () => {
  * Replaces the company's overrides (an empty field goes back to the default), then checks every
  * cycling project under the new rules so a tank they now pass gets its notice.
  */
-export const PUT = route(async (req) => {
-  const input = await parseJson(req, cycleRulesSchema);
-  await requireUser("lead");
+export const PUT = userRoute({ roles: ["lead"], schema: cycleRulesSchema }, async ({ input }) => {
   const overrides: Partial<CycleRules> = {};
   for (const [key, value] of Object.entries(input)) {
     if (value !== null && value !== undefined) (overrides as Record<string, unknown>)[key] = value;

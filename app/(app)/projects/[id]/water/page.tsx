@@ -13,6 +13,8 @@ import { WaterTestForm } from "./_components/water-test-form";
 import { DosePanel } from "./_components/dose-panel";
 import { StockingPanel } from "./_components/stocking-panel";
 import { toReadingView, toDoseView, toBatchView } from "./_components/views";
+import { KitChoice } from "./_components/kit-choice";
+import { getProjectKits, listTestKits } from "@/db/queries/test-kits";
 
 export const metadata: Metadata = { title: "Water & cycling" };
 
@@ -33,10 +35,13 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
   const canVoid = canOnProject(relation, "void_water_test");
   const canStock = canOnProject(relation, "record_stocking");
   const fishStage = project.stage === "first_stocking" || project.stage === "in_service";
-  const [doses, volume, batches] = await Promise.all([
+  const canChooseKits = canOnProject(relation, "edit_details");
+  const [doses, volume, batches, kits, companyKits] = await Promise.all([
     canDose ? listDoses(project.id) : Promise.resolve([]),
     canDose ? getDesignVolume(project.id) : Promise.resolve(null),
     listStockingBatches(project.id),
+    getProjectKits(project.id),
+    canChooseKits ? listTestKits() : Promise.resolve([]),
   ]);
 
   const counted = tests.filter((t) => !t.voided).reverse();
@@ -73,7 +78,9 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
         )}
       </section>
 
-      <WaterTestForm projectId={project.id} unitSystem={unitSystem} />
+      {canChooseKits && <KitChoice projectId={project.id} chosen={kits} kits={companyKits} />}
+
+      <WaterTestForm projectId={project.id} unitSystem={unitSystem} kits={kits} />
 
       <ReadingsTable projectId={project.id} rows={tests.map(toReadingView)} unitSystem={unitSystem} canVoid={canVoid} />
 

@@ -1,15 +1,11 @@
 import { NextResponse } from "next/server";
-import { route } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { projectRoute } from "@/server/route";
 import { listChecklistItems, listProjectTicks } from "@/db/queries/checklists";
 import { latestTicks, stageProgress } from "@/lib/install/checklist-progress";
 import { STAGES } from "@/lib/stages/stages";
 
 /** The company's items and this project's state of each: the newest tick by seq. */
-export const GET = route<{ id: string }>(async (_req, { params }) => {
-  const user = await requireUser("lead", "crew");
-  const { project } = await requireProject({ projectId: (await params).id, user, action: "tick_checklist" });
+export const GET = projectRoute({ action: "view_internal" }, async ({ project }) => {
   const [items, ticks] = await Promise.all([listChecklistItems(), listProjectTicks(project.id)]);
   const latest = latestTicks(ticks);
   return NextResponse.json({

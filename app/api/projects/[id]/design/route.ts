@@ -1,17 +1,10 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { projectRoute } from "@/server/route";
 import { getDesign, getSurvey, saveDesign } from "@/db/queries/survey-design";
 import { tankDesignSchema } from "@/lib/survey/tank-design.schema";
 import { loadCheck, type StoredDesign } from "@/lib/survey/load-check";
 
-type Params = { id: string };
-
-export const GET = route<Params>(async (_req, ctx) => {
-  const { id } = await ctx.params;
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "edit_survey" });
+export const GET = projectRoute({ action: "edit_survey" }, async ({ project }) => {
   const [design, survey] = await Promise.all([getDesign(project.id), getSurvey(project.id)]);
   return NextResponse.json({
     design: design?.data ?? null,
@@ -25,11 +18,7 @@ export const GET = route<Params>(async (_req, ctx) => {
  * is a 400 with a message per field and nothing is stored. A tank too big for the room or the door
  * is saved, with warnings: that is for the people planning the install to decide.
  */
-export const PUT = route<Params>(async (req, ctx) => {
-  const { id } = await ctx.params;
-  const input = await parseJson(req, tankDesignSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "edit_survey" });
+export const PUT = projectRoute({ action: "edit_survey", schema: tankDesignSchema }, async ({ input, project, user }) => {
   const design = input as StoredDesign;
   const saved = await saveDesign({ projectId: project.id, data: design, userId: user.id });
   const survey = await getSurvey(project.id);

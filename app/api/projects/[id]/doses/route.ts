@@ -1,27 +1,14 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { projectRoute } from "@/server/route";
 import { badRequest } from "@/server/errors";
-import { requireProject } from "@/db/queries/project-access";
 import { addDose, listDoses } from "@/db/queries/water";
-import { doseSchema } from "@/app/(app)/projects/[id]/water/dose.schema";
+import { doseSchema } from "./dose.schema";
 import { READING_LIMITS } from "@/lib/cycling/readings";
 
-type Params = { id: string };
-
-export const GET = route<Params>(async (_req, ctx) => {
-  const { id } = await ctx.params;
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "log_dose" });
-  return NextResponse.json({ doses: await listDoses(project.id) });
-});
+export const GET = projectRoute({ action: "log_dose" }, async ({ project }) => NextResponse.json({ doses: await listDoses(project.id) }));
 
 /** Logs an ammonia dose given during a fishless cycle (crew or lead). */
-export const POST = route<Params>(async (req, ctx) => {
-  const { id } = await ctx.params;
-  const input = await parseJson(req, doseSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "log_dose" });
+export const POST = projectRoute({ action: "log_dose", schema: doseSchema }, async ({ input, project, user }) => {
   if (input.dosedAt.getTime() > Date.now() + READING_LIMITS.futureToleranceMinutes * 60_000) {
     throw badRequest("Some fields need attention.", { dosedAt: "The dose time is in the future; check the date and time." });
   }

@@ -1,14 +1,15 @@
 import { z } from "zod";
+import { isoInstant, text } from "@/lib/validation/text";
 
 export const approveLoadSchema = z.object({
   /** Who checked the floor and their reference, when the screening is over the floor's rated load. */
-  engineerReference: z.string().trim().max(500, "Keep the engineer's reference under 500 characters.").nullish(),
+  engineerReference: text(500, "Keep the engineer's reference under 500 characters.").nullish(),
   /** When the design the lead looked at was saved; a different one means it changed meanwhile. */
-  designUpdatedAt: z.iso.datetime({ offset: true, error: "That design date isn't valid." }).nullish(),
+  designUpdatedAt: isoInstant("That design date isn't valid.").nullish(),
 });
 
 export const revokeLoadSchema = z.object({
-  reason: z.string().trim().min(3, "Say why the approval is withdrawn.").max(1000, "Keep the reason under 1000 characters."),
+  reason: text(1000, "Keep the reason under 1000 characters.", "Say why the approval is withdrawn.").min(3, "Say why the approval is withdrawn."),
 });
 
 export type ApproveLoadInput = z.infer<typeof approveLoadSchema>;

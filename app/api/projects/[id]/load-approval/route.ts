@@ -1,20 +1,13 @@
 import { NextResponse } from "next/server";
-import { route, parseJson, type RouteContext } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { projectRoute } from "@/server/route";
 import { AppError, conflict, unprocessable } from "@/server/errors";
-import { requireProject } from "@/db/queries/project-access";
 import { approveLoad, getLatestApproval, getSurvey } from "@/db/queries/survey-design";
 import { loadCheck } from "@/lib/survey/load-check";
 import { validateDesign } from "@/lib/tank/design";
 import { approveLoadSchema } from "./load-approval.schema";
 import { revokeApproval } from "./revoke-approval";
 
-type Params = { id: string };
-
-export const GET = route<Params>(async (_req, ctx) => {
-  const { id } = await ctx.params;
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "edit_survey" });
+export const GET = projectRoute({ action: "edit_survey" }, async ({ project }) => {
   return NextResponse.json({ approval: await getLatestApproval(project.id) });
 });
 
@@ -22,11 +15,7 @@ export const GET = route<Params>(async (_req, ctx) => {
  * The lead signs the load check off for the design exactly as stored now. Over the floor's rated
  * load, the engineer's approval reference is required.
  */
-export const POST = route<Params>(async (req, ctx) => {
-  const { id } = await ctx.params;
-  const input = await parseJson(req, approveLoadSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "approve_load" });
+export const POST = projectRoute({ action: "approve_load", schema: approveLoadSchema }, async ({ input, project, user }) => {
   const survey = await getSurvey(project.id);
   if (!survey?.complete) throw unprocessable("Finish the site survey first: the floor screening needs the room, floor and access details.");
   const engineerReference = input.engineerReference?.trim() || null;
@@ -59,4 +48,4 @@ export const POST = route<Params>(async (req, ctx) => {
 });
 
 /** Withdraws the approval with a reason; the record stays. */
-export const DELETE = route<Params>(async (req, ctx: RouteContext<Params>) => revokeApproval(req, ctx));
+export const DELETE = revokeApproval;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "@/lib/validation/text";
 import { STAGES } from "@/lib/stages/stages";
 import { UUID_PATTERN } from "@/lib/stages/ids";
 
@@ -12,8 +13,8 @@ export const moveSchema = z
     afterId: cardId.optional(),
     position: z.number().int("The position is a whole number.").min(0, "The position starts at 0.").max(100_000).optional(),
     version: z.number({ message: "The card's version is missing; reload the board and try again." }).int().min(1),
-    reason: z.string().trim().max(500, "Keep the reason under 500 characters.").optional(),
-    overrideReason: z.string().trim().min(5, "Say in a few words why the gate may be passed.").max(500, "Keep the reason under 500 characters.").optional(),
+    reason: text(500, "Keep the reason under 500 characters.").optional(),
+    overrideReason: text(500, "Keep the reason under 500 characters.").min(5, "Say in a few words why the gate may be passed.").optional(),
   })
   .refine((v) => [v.beforeId, v.afterId, v.position].filter((x) => x !== undefined).length <= 1, {
     message: "Give one of beforeId, afterId or position.",

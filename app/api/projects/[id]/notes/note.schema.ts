@@ -1,7 +1,8 @@
 import { z } from "zod";
+import { text } from "@/lib/validation/text";
 
 export const noteSchema = z.object({
-  body: z.string({ message: "Write the note first." }).trim().min(1, "Write the note first.").max(4000, "Keep a note under 4000 characters."),
+  body: text(4000, "Keep a note under 4000 characters.", "Write the note first.").min(1, "Write the note first."),
   shared: z.boolean({ message: "Say whether the client sees this note." }),
 });
 

@@ -1,32 +1,22 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
+import { projectRoute, requireAction } from "@/server/route";
 import { badRequest } from "@/server/errors";
-import { requireProject } from "@/db/queries/project-access";
+import { canOnProject } from "@/lib/auth/permissions";
 import { addStockingBatch, listStockingBatches } from "@/db/queries/stocking";
-import { stockingBatchSchema } from "@/app/(app)/projects/[id]/water/stocking-batch.schema";
+import { stockingBatchSchema } from "./stocking-batch.schema";
 import { READING_LIMITS } from "@/lib/cycling/readings";
 
-type Params = { id: string };
-
-export const GET = route<Params>(async (_req, ctx) => {
-  const { id } = await ctx.params;
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "view" });
-  return NextResponse.json({ batches: await listStockingBatches(project.id) });
-});
+export const GET = projectRoute({ action: "view" }, async ({ project }) => NextResponse.json({ batches: await listStockingBatches(project.id) }));
 
 /** Records a batch of fish; refused with plain reasons until the water allows it, unless the lead overrides. */
-export const POST = route<Params>(async (req, ctx) => {
-  const { id } = await ctx.params;
-  const input = await parseJson(req, stockingBatchSchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "record_stocking" });
+export const POST = projectRoute({ action: "record_stocking", schema: stockingBatchSchema }, async ({ input, project, relation, user }) => {
+  if (input.overrideReason) requireAction(relation, "override_gate", "Only the lead can add fish past the re-test rule.");
   const now = new Date();
   const addedAt = input.addedAt ?? now;
   if (addedAt.getTime() > now.getTime() + READING_LIMITS.futureToleranceMinutes * 60_000) {
     throw badRequest("Some fields need attention.", { addedAt: "That time is in the future; record fish once they are in." });
   }
-  const result = await addStockingBatch({ projectId: project.id, user, values: { ...input, addedAt }, now });
+  const by = { id: user.id, canOverride: canOnProject(relation, "override_gate") };
+  const result = await addStockingBatch({ projectId: project.id, user: by, values: { ...input, addedAt }, now });
   return NextResponse.json(result, { status: 201 });
 });

@@ -1,17 +1,10 @@
 import { NextResponse } from "next/server";
-import { route, parseJson } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { projectRoute } from "@/server/route";
 import { getSurvey, saveSurvey } from "@/db/queries/survey-design";
 import { siteSurveySchema } from "@/lib/survey/site-survey.schema";
 import { SURVEY_FIELD_LABELS, surveyMissingFields } from "@/lib/survey/survey-missing";
 
-type Params = { id: string };
-
-export const GET = route<Params>(async (_req, ctx) => {
-  const { id } = await ctx.params;
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "edit_survey" });
+export const GET = projectRoute({ action: "edit_survey" }, async ({ project }) => {
   const survey = await getSurvey(project.id);
   const missing = surveyMissingFields(survey?.data);
   return NextResponse.json({ survey: survey?.data ?? null, complete: survey?.complete ?? false, missing });
@@ -21,11 +14,7 @@ export const GET = route<Params>(async (_req, ctx) => {
  * Saves the survey whole. A half-done survey is kept as a draft; it is marked complete only when
  * every required field is filled in, which is what lets the project into the load check.
  */
-export const PUT = route<Params>(async (req, ctx) => {
-  const { id } = await ctx.params;
-  const data = await parseJson(req, siteSurveySchema);
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: id, user, action: "edit_survey" });
+export const PUT = projectRoute({ action: "edit_survey", schema: siteSurveySchema }, async ({ input: data, project, user }) => {
   const missing = surveyMissingFields(data);
   const row = await saveSurvey({ projectId: project.id, data, complete: missing.length === 0, userId: user.id });
   return NextResponse.json({

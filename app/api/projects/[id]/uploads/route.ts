@@ -1,14 +1,15 @@
 import { NextResponse } from "next/server";
-import { parseJson, route } from "@/server/route";
-import { requireUser } from "@/server/session";
-import { requireProject } from "@/db/queries/project-access";
+import { projectRoute } from "@/server/route";
+import { canOnProject } from "@/lib/auth/permissions";
 import { createPendingAttachment } from "@/db/queries/attachments";
 import { presignPut, putObject } from "@/server/storage";
 import { badRequest } from "@/server/errors";
-import { fieldErrorsFromIssues } from "@/server/errors";
 import { MAX_UPLOAD_BYTES } from "@/lib/install/upload-rules";
-import { uploadSchema, type UploadBody } from "./upload.schema";
+import { uploadSchema } from "./upload.schema";
 import { newObjectKey, storeThumbnail, vetBytes, vetUpload } from "./finish-upload";
+
+// Room for the form's boundaries and text fields around the file itself.
+const FORM_OVERHEAD_BYTES = 64 * 1024;
 
 /**
  * Starts an upload. JSON `{ fileName, contentType, sizeBytes, stage, caption?, isProblem? }` answers
@@ -16,34 +17,13 @@ import { newObjectKey, storeThumbnail, vetBytes, vetUpload } from "./finish-uplo
  * `file` field (plus the same fields) is stored in one step through the server, which is what the
  * app's own pages use so a phone needs only one connection.
  */
-export const POST = route<{ id: string }>(async (req, { params }) => {
-  const multipart = (req.headers.get("content-type") ?? "").startsWith("multipart/form-data");
-  let input: UploadBody;
-  let file: File | null = null;
-  if (multipart) {
-    const form = await req.formData().catch(() => null);
-    if (!form) throw badRequest("The upload was cut off. Try again.");
-    const f = form.get("file");
-    if (!(f instanceof File)) throw badRequest("Choose a file to upload.", { file: "Choose a file to upload." });
-    file = f;
-    const parsed = uploadSchema.safeParse({
-      fileName: f.name,
-      contentType: f.type,
-      sizeBytes: f.size,
-      stage: form.get("stage"),
-      caption: form.get("caption") || null,
-      isProblem: form.get("isProblem") === "true",
-    });
-    if (!parsed.success) throw badRequest("Some fields need attention.", fieldErrorsFromIssues(parsed.error.issues));
-    input = parsed.data;
-  } else {
-    input = await parseJson(req, uploadSchema);
-  }
-  const user = await requireUser();
-  const { project } = await requireProject({ projectId: (await params).id, user, action: "upload_photo" });
+export const POST = projectRoute(
+  { action: "upload_photo", schema: uploadSchema, multipart: { limit: MAX_UPLOAD_BYTES + FORM_OVERHEAD_BYTES, toInput: formToUpload } },
+  async ({ input, form, project, relation, user }) => {
+  const file = form?.get("file") instanceof File ? (form.get("file") as File) : null;
   const vetted = vetUpload(input);
-  // A client's upload is always a problem photo on the project's current stage.
-  const isClient = user.role === "client";
+  // Someone who can't file stage photos (a client) always uploads a problem photo on the current stage.
+  const isClient = !canOnProject(relation, "file_stage_photos");
   const base = {
     projectId: project.id,
     stage: isClient ? project.stage : input.stage,
@@ -76,7 +56,22 @@ export const POST = route<{ id: string }>(async (req, { params }) => {
     },
     { status: 201 },
   );
-});
+  },
+);
+
+/** The form's fields, shaped like the JSON body, so one schema checks both. */
+function formToUpload(form: FormData) {
+  const f = form.get("file");
+  if (!(f instanceof File)) throw badRequest("Choose a file to upload.", { file: "Choose a file to upload." });
+  return {
+    fileName: f.name,
+    contentType: f.type,
+    sizeBytes: f.size,
+    stage: form.get("stage"),
+    caption: form.get("caption") || null,
+    isProblem: form.get("isProblem") === "true",
+  };
+}
 
 function publicAttachment(a: { id: string; stage: string; fileName: string; contentType: string; sizeBytes: number; caption: string | null; isProblem: boolean; status: string; thumbKey: string | null }) {
   return {

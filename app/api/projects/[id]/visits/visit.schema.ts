@@ -1,15 +1,16 @@
 import { z } from "zod";
+import { dateTime, text } from "@/lib/validation/text";
 import { visitKinds } from "@/db/schema/visits";
 
 export const visitSchema = z.object({
   kind: z.enum(visitKinds, { message: "Choose what the visit is for." }),
-  startsAt: z.coerce.date({ message: "Enter the visit's date and time." }).refine((d) => !Number.isNaN(d.getTime()), "Enter the visit's date and time."),
+  startsAt: dateTime("Enter the visit's date and time."),
   durationMinutes: z.coerce
     .number({ message: "Enter how long the visit takes, in minutes." })
     .int("Use whole minutes.")
     .min(15, "A visit takes at least 15 minutes.")
     .max(24 * 60, "A visit can't be longer than a day; add one per day."),
-  notes: z.string().trim().max(1000, "Keep the notes under 1000 characters.").optional().or(z.literal("")),
+  notes: text(1000, "Keep the notes under 1000 characters.").optional(),
 });
 
 export type VisitInput = z.input<typeof visitSchema>;

@@ -3,7 +3,7 @@ import { badRequest, type FieldErrors } from "@/server/errors";
 import { validateReading } from "@/lib/cycling/readings";
 import { fahrenheitToCelsius } from "@/lib/tank/units";
 import type { ReadingValues } from "@/db/queries/water";
-import type { WaterTestValues } from "@/app/(app)/projects/[id]/water/water-test.schema";
+import type { WaterTestValues } from "./water-test.schema";
 
 // validateReading speaks of stored fields; the form's temperature field holds the person's unit.
 const FORM_FIELD: Record<string, string> = { tempC: "temperature" };

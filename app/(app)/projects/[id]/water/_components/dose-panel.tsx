@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { format } from "date-fns";
-import { doseSchema, type DoseInput, type DoseValues } from "../dose.schema";
+import { doseSchema, type DoseInput, type DoseValues } from "@/app/api/projects/[id]/doses/dose.schema";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
 import { inputStyles } from "@/components/ui/button-styles";

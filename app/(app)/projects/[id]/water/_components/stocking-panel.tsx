@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { format } from "date-fns";
-import { stockingBatchSchema, type StockingBatchInput, type StockingBatchValues } from "../stocking-batch.schema";
+import { stockingBatchSchema, type StockingBatchInput, type StockingBatchValues } from "@/app/api/projects/[id]/stocking-batches/stocking-batch.schema";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
 import { Caution } from "@/components/ui/caution";

@@ -2,7 +2,7 @@
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { sendJson } from "@/lib/http/send-json";
-import { voidSchema } from "../water-test.schema";
+import { voidSchema } from "@/app/api/projects/[id]/water-tests/water-test.schema";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
 
 /** Asks for a reason, then voids the record. Nothing is deleted: the row stays, marked voided. */

@@ -4,8 +4,9 @@ import { useRouter } from "next/navigation";
 import { useForm, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { format } from "date-fns";
-import { correctWaterTestSchema, waterTestSchema, type WaterTestInput, type WaterTestValues } from "../water-test.schema";
-import { kitSteps } from "@/lib/cycling/readings";
+import { correctWaterTestSchema, waterTestSchema, type WaterTestInput, type WaterTestValues } from "@/app/api/projects/[id]/water-tests/water-test.schema";
+import type { Analyte } from "@/lib/cycling/readings";
+import { NEUTRAL_TEST_KITS, type TestKit } from "@/lib/cycling/test-kits";
 import { celsiusToFahrenheit } from "@/lib/tank/units";
 import { sendJson } from "@/lib/http/send-json";
 import { Field } from "@/components/ui/field";
@@ -19,16 +20,29 @@ const localNow = () => format(new Date(), "yyyy-MM-dd'T'HH:mm");
 const text = (v: number | null | undefined) => (v == null ? "" : String(Number(v.toFixed(3))));
 
 const ANALYTES = [
-  { name: "ammoniaMgL", label: "Ammonia", steps: kitSteps.ammonia, hint: "Total ammonia as the kit reads it." },
-  { name: "nitriteMgL", label: "Nitrite", steps: kitSteps.nitrite, hint: undefined },
-  { name: "nitrateMgL", label: "Nitrate", steps: kitSteps.nitrate, hint: undefined },
+  { name: "ammoniaMgL", analyte: "ammonia", label: "Ammonia", hint: undefined },
+  { name: "nitriteMgL", analyte: "nitrite", label: "Nitrite", hint: undefined },
+  { name: "nitrateMgL", analyte: "nitrate", label: "Nitrate", hint: undefined },
 ] as const;
 
 /**
  * Logs a water test, or (for the lead) corrects one: the correction is saved as a new reading and
  * the old one is voided with the reason. Temperature is typed in the person's own unit.
  */
-export function WaterTestForm({ projectId, unitSystem, correcting, onDone }: { projectId: string; unitSystem: "metric" | "imperial"; correcting?: ReadingView; onDone?: () => void }) {
+export function WaterTestForm({
+  projectId,
+  unitSystem,
+  correcting,
+  onDone,
+  kits = NEUTRAL_TEST_KITS,
+}: {
+  projectId: string;
+  unitSystem: "metric" | "imperial";
+  correcting?: ReadingView;
+  onDone?: () => void;
+  /** The kit each analyte is read with on this project; its steps are the quick picks. */
+  kits?: Readonly<Record<Analyte, TestKit>>;
+}) {
   const router = useRouter();
   const unit = unitSystem === "imperial" ? "F" : "C";
   const [status, setStatus] = useState<{ ok: boolean; text: string } | null>(null);
@@ -88,7 +102,7 @@ export function WaterTestForm({ projectId, unitSystem, correcting, onDone }: { p
       {ANALYTES.map((a) => (
         <Field key={a.name} id={`${idp}-${a.name}`} label={`${a.label} (mg/L)`} error={err(a.name)} hint={a.hint}>
           <input id={`${idp}-${a.name}`} inputMode="decimal" className={`${inputStyles} num`} aria-invalid={!!e[a.name]} {...register(a.name)} />
-          <KitPicks label={a.label} steps={a.steps} current={watch(a.name)} onPick={(v) => setValue(a.name, v, { shouldDirty: true })} />
+          <KitPicks label={a.label} kit={kits[a.analyte]} current={watch(a.name)} onPick={(v) => setValue(a.name, v, { shouldDirty: true })} />
         </Field>
       ))}
       <Field id={`${idp}-ph`} label="pH" error={err("pH")}>

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { dateTime, optionalNotes, optionalNumber, reasonSchema } from "./form-values";
+import { optionalNumber } from "@/lib/validation/number";
+import { dateTime, optionalNotes, reasonSchema } from "@/lib/validation/text";
 
 /**
  * A water test as entered. Temperature is in the unit named by `temperatureUnit` (the person's own

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { optionalNumber } from "../projects/[id]/water/form-values";
+import { optionalNumber } from "@/lib/validation/number";
 
 /**
  * The company's cycle rules as the lead edits them: each left empty keeps the house default.

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { dateTime, optionalNotes, optionalNumber, requiredNumber } from "./form-values";
+import { optionalNumber, requiredNumber } from "@/lib/validation/number";
+import { dateTime, optionalNotes } from "@/lib/validation/text";
 
 /** An ammonia dose given during a fishless cycle (mg/L as NH3, mL, % w/w). */
 export const doseSchema = z.object({
