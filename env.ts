@@ -39,6 +39,15 @@ const schema = z.object({
   S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
   S3_FORCE_PATH_STYLE: bool,
+  /**
+   * The card payment service's API address. Unset outside production: the local fake on
+   * 127.0.0.1:4566 that `npm start` runs; unset in production: the SDK's own service.
+   */
+  PAYMENTS_API_URL: z.string().url().optional(),
+  /** The payment service's secret API key; required in production. */
+  PAYMENTS_SECRET_KEY: z.string().min(8).optional(),
+  /** The secret the payment service signs webhooks with; required in production. */
+  PAYMENTS_WEBHOOK_SECRET: z.string().min(8).optional(),
   /** Turns on development-only pages (the caught-mail viewer). Never set in production. */
   TANKWRIGHT_DEV_TOOLS: bool,
 });
@@ -74,4 +83,18 @@ export function authSecret(): string {
     throw new Error("NEXTAUTH_SECRET must be set in production (at least 16 characters; the same on every app instance).");
   }
   return "tankwright-development-secret-not-for-production";
+}
+
+/** Where and how the app reaches the card payment service; local fake defaults outside production. */
+export function paymentsConfig(): { apiUrl: string | null; secretKey: string; webhookSecret: string } {
+  const e = env();
+  const prod = e.NODE_ENV === "production";
+  if (prod && !e.PAYMENTS_API_URL && (!e.PAYMENTS_SECRET_KEY || !e.PAYMENTS_WEBHOOK_SECRET)) {
+    throw new Error("PAYMENTS_SECRET_KEY and PAYMENTS_WEBHOOK_SECRET must be set in production.");
+  }
+  return {
+    apiUrl: e.PAYMENTS_API_URL ?? (prod ? null : "http://127.0.0.1:4566"),
+    secretKey: e.PAYMENTS_SECRET_KEY ?? "sk_test_tankwright_local_fake",
+    webhookSecret: e.PAYMENTS_WEBHOOK_SECRET ?? "whsec_tankwright_local_fake",
+  };
 }

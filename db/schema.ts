@@ -9,4 +9,5 @@ export * from "./schema/water";
 export * from "./schema/talk";
 export * from "./schema/visits";
 export * from "./schema/test-kits";
+export * from "./schema/money";
 export * from "./schema/sign-in-limits";

@@ -24,7 +24,7 @@ ensure_secret
 export APP_URL=${APP_URL:-http://localhost:$PORT}
 export NEXTAUTH_URL=${NEXTAUTH_URL:-$APP_URL}
 if [ -z "${SMTP_HOST:-}" ] && [ -z "${S3_ENDPOINT:-}" ]; then
-  start_fakes 1025 1080 4569 "$PROJECT_ROOT/.data/s3"
+  start_fakes 1025 1080 4569 "$PROJECT_ROOT/.data/s3" 4566
   export TANKWRIGHT_DEV_TOOLS=1
 fi
 

@@ -32,7 +32,7 @@ fi
 slot=${TEST_SLOT:-0}
 PORT=$((3100 + slot))
 PG_PORT=$((54339 + slot))
-SMTP_P=$((2525 + slot * 10)) MAILAPI_P=$((2580 + slot * 10)) S3_P=$((4579 + slot * 10))
+SMTP_P=$((2525 + slot * 10)) MAILAPI_P=$((2580 + slot * 10)) S3_P=$((4579 + slot * 10)) PAY_P=$((4575 + slot * 10))
 DIST=.next-test$([ "$slot" = 0 ] || echo "-$slot")
 
 cleanup() {
@@ -76,7 +76,8 @@ export DATABASE_URL=postgres://tankwright@127.0.0.1:$PG_PORT/tankwright_test
 export NEXTAUTH_SECRET=test-secret-for-the-test-run-only
 export APP_URL=http://127.0.0.1:$PORT NEXTAUTH_URL=http://127.0.0.1:$PORT TEST_APP_URL=http://127.0.0.1:$PORT
 rm -rf ".data/s3-test-$slot"
-start_fakes "$SMTP_P" "$MAILAPI_P" "$S3_P" "$PROJECT_ROOT/.data/s3-test-$slot"
+start_fakes "$SMTP_P" "$MAILAPI_P" "$S3_P" "$PROJECT_ROOT/.data/s3-test-$slot" "$PAY_P"
+export TEST_PAYMENTS_URL=$PAYMENTS_API_URL
 "${TSX[@]}" scripts/migrate.ts
 "${TSX[@]}" scripts/seed.ts
 

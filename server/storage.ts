@@ -1,5 +1,5 @@
 import "server-only";
-import { GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
 import { env } from "../env";
 
@@ -63,4 +63,14 @@ export async function presignGet(key: string, opts: { contentType: string; fileN
     new GetObjectCommand({ Bucket: bucket(), Key: key, ResponseContentType: opts.contentType, ResponseContentDisposition: disposition }),
     { expiresIn: GET_URL_SECONDS },
   );
+}
+
+/** The object as a stream with its size, for serving through the app with our own headers. */
+export async function getObjectStream(key: string): Promise<{ body: ReadableStream<Uint8Array>; size: number | undefined }> {
+  const res = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
+  return { body: res.Body!.transformToWebStream() as ReadableStream<Uint8Array>, size: res.ContentLength };
+}
+
+export async function deleteObject(key: string): Promise<void> {
+  await s3().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
 }

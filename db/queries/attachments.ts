@@ -31,8 +31,9 @@ export async function getAttachment(id: string): Promise<AttachmentRow | null> {
   return row ?? null;
 }
 
-export async function markAttachmentReady(id: string, thumbKey: string | null): Promise<AttachmentRow> {
-  const [row] = await db().update(attachments).set({ status: "ready", thumbKey }).where(eq(attachments.id, id)).returning();
+/** `sizeBytes` is the stored file's size, which re-encoding a photo changes. */
+export async function markAttachmentReady(id: string, thumbKey: string | null, sizeBytes: number): Promise<AttachmentRow> {
+  const [row] = await db().update(attachments).set({ status: "ready", thumbKey, sizeBytes }).where(eq(attachments.id, id)).returning();
   return row;
 }
 

@@ -31,6 +31,8 @@ export type FactRow = {
   filled: boolean;
   after24h: boolean | null;
   batches: number;
+  deposit_paid: boolean | null;
+  deposit_required: boolean;
 };
 
 /**
@@ -61,7 +63,8 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
         (array_agg(lc.passed order by lc.at desc, lc.id desc) filter (where lc.kind = 'after 24 hours'))[1] as after24h
       from leak_checks lc where lc.project_id in (select id from ids) group by lc.project_id
     ),
-    batches as (select sb.project_id, count(*)::int as n from stocking_batches sb where sb.project_id in (select id from ids) group by sb.project_id)
+    batches as (select sb.project_id, count(*)::int as n from stocking_batches sb where sb.project_id in (select id from ids) group by sb.project_id),
+    deposits as (select i.project_id, bool_or(i.status = 'paid') as paid from invoices i where i.kind = 'deposit' and i.project_id in (select id from ids) group by i.project_id)
     select ids.id,
       s.complete as survey_complete,
       coalesce(a.current, false) as approval_current,
@@ -70,13 +73,17 @@ export async function loadRecordFacts(set: ProjectSet, conn?: Conn): Promise<Map
       coalesce(t.done, 0) as checklist_done,
       coalesce(l.filled, false) as filled,
       l.after24h,
-      coalesce(b.n, 0) as batches
+      coalesce(b.n, 0) as batches,
+      d.paid as deposit_paid,
+      coalesce(ps.deposit_bp, (select ms.deposit_bp from money_settings ms limit 1), 5000) > 0 as deposit_required
     from ids
     left join site_surveys s on s.project_id = ids.id
     left join approvals a on a.project_id = ids.id
     left join ticks t on t.project_id = ids.id
     left join leaks l on l.project_id = ids.id
     left join batches b on b.project_id = ids.id
+    left join deposits d on d.project_id = ids.id
+    left join payment_schedules ps on ps.project_id = ids.id
   `;
   // Inside a transaction the caller's connection must run it; otherwise it is a prepared statement.
   const rows = conn ? ((await conn.execute(query)).rows as FactRow[]) : await queryPrepared<FactRow>("gate-facts", query);
@@ -152,6 +159,7 @@ export function toGateFacts(r: FactRow, cycle: CycleVerdict | null): GateFacts {
     leak: { filled: r.filled, after24hPassed: r.after24h },
     cycle,
     stockingBatches: r.batches,
+    deposit: r.deposit_paid === true ? "paid" : r.deposit_paid === false ? "unpaid" : r.deposit_required ? "not_invoiced" : "not_required",
   };
 }
 

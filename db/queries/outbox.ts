@@ -3,7 +3,7 @@ import type { Db, Tx } from "../index";
 import { notices, notificationPrefs, users, company } from "../schema";
 import type { Email } from "../../lib/mail/layout";
 
-export type NoticeKind = "invitation" | "stage_change" | "cycle_ready" | "shared_note" | "message";
+export type NoticeKind = "invitation" | "stage_change" | "cycle_ready" | "shared_note" | "message" | "receipt";
 
 /**
  * Writes an e-mail to the outbox inside the caller's transaction and queues the job that sends it,
@@ -14,7 +14,8 @@ export async function enqueueNotice(
   tx: Tx | Db,
   opts: { kind: NoticeKind; projectId?: string | null; recipientId: string; toEmail: string; email: Email },
 ): Promise<string | null> {
-  if (opts.kind !== "invitation") {
+  // Invitations and payment receipts always go: they are not notices a person can turn off.
+  if (opts.kind !== "invitation" && opts.kind !== "receipt") {
     const [pref] = await tx
       .select({ enabled: notificationPrefs.enabled })
       .from(notificationPrefs)

@@ -4,6 +4,7 @@ import { db } from "../index";
 import { projects, stageEvents } from "../schema";
 import { loadGateFacts } from "./gate-facts";
 import { queueStageChangeNotices } from "./stage-change-notices";
+import { issueInstalmentsOnMove } from "./invoices";
 import { checkGate, moveDirection, needsCycleFacts } from "../../lib/stages/gates";
 import { keyForPlacement, type Placement } from "../../lib/stages/ordering";
 import { stageIndex, type Stage } from "../../lib/stages/stages";
@@ -95,6 +96,8 @@ export async function moveProject(projectId: string, input: MoveInput, user: { i
       const why = override ? input.overrideReason!.trim() : reason;
       await tx.insert(stageEvents).values({ projectId, fromStage: from, toStage: to, byUserId: user.id, at: now, reason: why, override, gateReasons });
       await queueStageChangeNotices(tx, { projectId, fromStage: from, toStage: to, byUserId: user.id, override, reason: why });
+      // Install day and handover bill their instalments of the accepted quote, with the move.
+      await issueInstalmentsOnMove(tx, { projectId, from, to, now });
     }
     return {
       id: updated.id,

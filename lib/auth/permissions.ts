@@ -24,7 +24,13 @@ export type ProjectAction =
   | "view_internal"
   // Filing photos on any stage, and finishing another person's upload (a client's photo is always a problem photo).
   | "file_stage_photos"
-  | "finish_others_upload";
+  | "finish_others_upload"
+  // Reading the project's quote and invoices (the client: the current quote and their own invoices).
+  | "see_money"
+  // Pricing, issuing quotes, setting the schedule, recording transfers.
+  | "manage_money"
+  // Accepting the quote and paying invoices: the project's own client.
+  | "accept_and_pay";
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
@@ -42,7 +48,9 @@ const CREW: ProjectAction[] = [
   "file_stage_photos",
   "send_message",
 ];
-const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message"];
+const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message", "see_money", "accept_and_pay"];
+// The client's signature and card are theirs: nobody accepts or pays in their place.
+const CLIENT_ONLY: ProjectAction[] = ["accept_and_pay"];
 
 /** True when the caller can see the project at all (else it answers 404, not 403). */
 export function canSeeProject(rel: Relation): boolean {
@@ -53,6 +61,7 @@ export function canSeeProject(rel: Relation): boolean {
 
 export function canOnProject(rel: Relation, action: ProjectAction): boolean {
   if (!canSeeProject(rel)) return false;
+  if (CLIENT_ONLY.includes(action)) return rel.role === "client" && rel.owner;
   if (rel.role === "lead") return true;
   if (rel.role === "crew") return CREW.includes(action);
   return CLIENT.includes(action);

@@ -22,7 +22,7 @@ export function leakCheckRefusal(kind: LeakKind, rows: LeakRow[], now: Date): st
   const hours = (now.getTime() - lastFill.at.getTime()) / 3_600_000;
   if (hours < MIN_HOURS_BEFORE_DAY_CHECK) {
     const wait = Math.ceil((MIN_HOURS_BEFORE_DAY_CHECK - hours) * 10) / 10;
-    return `The tank was filled ${hours.toFixed(1)} hours ago. The day-after check needs at least ${MIN_HOURS_BEFORE_DAY_CHECK} hours, so a slow seep has time to show: come back in ${wait} hours.`;
+    return `The tank was filled ${hours.toFixed(1)} hours ago. The day-after check needs at least ${MIN_HOURS_BEFORE_DAY_CHECK} hours, so a slow seep has time to show: come back in ${wait} ${wait === 1 ? "hour" : "hours"}.`;
   }
   return null;
 }

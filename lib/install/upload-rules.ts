@@ -90,3 +90,33 @@ export function checkUpload(meta: UploadMeta): { ok: true; fileName: string; con
   if (!name.ok) return { ok: false, field: "fileName", message: name.message };
   return { ok: true, fileName: name.name, contentType };
 }
+
+/**
+ * The most pixels a photo may have. A phone's full-resolution photo is 12 to 50 million pixels
+ * (common practice); past that the decoded image alone runs to hundreds of megabytes.
+ */
+export const MAX_UPLOAD_PIXELS = 50_000_000;
+
+export function pixelRefusal(width: number, height: number): string | null {
+  if (!(width > 0 && height > 0)) return "The photo couldn't be read; it may be damaged. Take it again or export it as JPEG.";
+  if (width * height > MAX_UPLOAD_PIXELS) {
+    return `The photo is ${width} × ${height} pixels; the limit is ${MAX_UPLOAD_PIXELS / 1_000_000} million pixels. Export a smaller copy and upload that.`;
+  }
+  return null;
+}
+
+// Markup that would make a browser treat the bytes as a page if it ever guessed the type.
+const MARKUP = /<\s*(!doctype|html|head|body|script|iframe|svg|object|embed|meta)\b/i;
+
+/**
+ * Why a file that starts like a PDF is refused, or null: a PDF ends with its end-of-file marker
+ * (allowing trailing whitespace), and its opening carries no web-page markup.
+ */
+export function pdfRefusal(bytes: Uint8Array): string | null {
+  const head = new TextDecoder("latin1").decode(bytes.subarray(0, 2048));
+  const tail = new TextDecoder("latin1").decode(bytes.subarray(Math.max(0, bytes.byteLength - 1024)));
+  if (MARKUP.test(head) || !tail.includes("%%EOF")) {
+    return "That PDF isn't complete or isn't a real PDF. Save it again from the program that made it and upload the new copy.";
+  }
+  return null;
+}

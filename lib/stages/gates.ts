@@ -13,6 +13,11 @@ export type GateFacts = {
   /** The cycle gate's verdict, or null when it wasn't evaluated for this project. */
   cycle: { ready: boolean; reasons: string[] } | null;
   stockingBatches: number;
+  /**
+   * The deposit: "paid"; "unpaid" (invoiced, not yet paid); "not_invoiced" (no quote accepted yet);
+   * "not_required" (the project's schedule asks no deposit).
+   */
+  deposit: "paid" | "unpaid" | "not_invoiced" | "not_required";
 };
 
 export type GateResult = { open: boolean; reasons: string[] };
@@ -27,11 +32,14 @@ export function reasonsInto(stage: Stage, facts: GateFacts): string[] {
     case "stand_load_check":
       if (!facts.survey) return ["The site survey isn't complete: it hasn't been started yet."];
       return facts.survey.complete ? [] : ["The site survey isn't complete: finish its required fields and mark it complete."];
-    case "aquascape":
-      if (facts.loadApproval === "current") return [];
-      return facts.loadApproval === "stale"
-        ? ["The load check was approved for an earlier design; approve it again."]
-        : ["The load check hasn't been approved by the lead."];
+    case "aquascape": {
+      const out: string[] = [];
+      if (facts.loadApproval === "stale") out.push("The load check was approved for an earlier design; approve it again.");
+      else if (facts.loadApproval === "none") out.push("The load check hasn't been approved by the lead.");
+      if (facts.deposit === "unpaid") out.push("The deposit isn't paid yet: glass is ordered and install day booked once it is.");
+      else if (facts.deposit === "not_invoiced") out.push("The deposit isn't paid yet: the client hasn't accepted a quote.");
+      return out;
+    }
     case "fill_leak_test": {
       const { total, done } = facts.aquascapeChecklist;
       if (total === 0) return ["The aquascape checklist has no items yet; the lead adds them under Checklists."];

@@ -49,11 +49,14 @@ ensure_secret() {
   fi
 }
 
-# start_fakes SMTP_PORT MAIL_HTTP_PORT S3_PORT S3_DIR: the local mail catcher and object store.
+# start_fakes SMTP_PORT MAIL_HTTP_PORT S3_PORT S3_DIR PAY_PORT: the local mail catcher, object store and
+# card payment service (which sends its webhooks to $APP_URL, so export APP_URL first).
 start_fakes() {
-  FAKE_SMTP_PORT=$1 FAKE_MAIL_HTTP_PORT=$2 FAKE_S3_PORT=$3 FAKE_S3_DIR=$4 "${TSX[@]}" scripts/fakes.ts &
+  FAKE_SMTP_PORT=$1 FAKE_MAIL_HTTP_PORT=$2 FAKE_S3_PORT=$3 FAKE_S3_DIR=$4 FAKE_PAY_PORT=$5 "${TSX[@]}" scripts/fakes.ts &
   CHILD_PIDS+=($!)
   export SMTP_HOST=127.0.0.1 SMTP_PORT=$1 MAIL_CATCHER_URL="http://127.0.0.1:$2"
   export S3_ENDPOINT="http://127.0.0.1:$3" S3_FORCE_PATH_STYLE=1 S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER
+  export PAYMENTS_API_URL="http://127.0.0.1:$5"
   wait_http "http://127.0.0.1:$2/api/health" 30
+  wait_http "http://127.0.0.1:$5/api/health" 30
 }

@@ -5,6 +5,7 @@ import { stageEvents } from "@/db/schema";
 import { getProject, makeTeam } from "../support/fixtures";
 import { signedIn } from "../support/http";
 import { approveLoad, changeDesign, completeSurvey, finishCycle, recordLeakChecks, recordStocking, tickAquascape } from "./board-support";
+import { payDeposit } from "./money-support";
 import type { Stage } from "@/lib/stages/stages";
 
 async function move(s: Awaited<ReturnType<typeof signedIn>>, id: string, toStage: Stage, extra: Record<string, unknown> = {}) {
@@ -38,6 +39,7 @@ describe("the gates between stages", () => {
 
   it("into aquascape: needs a live approval of the current design", async () => {
     const t = await makeTeam("stand_load_check");
+    await payDeposit(t.project, t.client, t.lead);
     const s = await signedIn(t.lead);
     let res = await move(s, t.project.id, "aquascape");
     expect(res.status).toBe(422);
@@ -112,6 +114,10 @@ describe("the gates between stages", () => {
     expect(res.json.reasons.some((r: string) => r.includes("site survey"))).toBe(false);
     await approveLoad(t.project, t.lead);
     await tickAquascape(t.project, t.lead);
+    res = await move(s, t.project.id, "fill_leak_test");
+    expect(res.status).toBe(422);
+    expect(res.json.reasons).toEqual(["Into Aquascape: The deposit isn't paid yet: the client hasn't accepted a quote."]);
+    await payDeposit(t.project, t.client, t.lead);
     res = await move(s, t.project.id, "fill_leak_test");
     expect(res.status).toBe(200);
     const events = await db().select().from(stageEvents).where(and(eq(stageEvents.projectId, t.project.id), eq(stageEvents.toStage, "fill_leak_test")));

@@ -19,6 +19,11 @@ export class Session {
     return other;
   }
 
+  /** The cookies as a Cookie header, for a request built by hand (a streamed body). */
+  cookieString() {
+    return this.cookieHeader();
+  }
+
   private cookieHeader() {
     return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
   }
@@ -92,6 +97,13 @@ export class Session {
       json = null;
     }
     return { status: res.status, json: json as Record<string, unknown> & any, text, headers: res.headers };
+  }
+
+  /** The response itself, for bodies that aren't text (files). */
+  async raw(path: string, init: RequestInit = {}): Promise<Response> {
+    const res = await fetch(`${TEST_APP_URL}${path}`, { ...init, headers: { cookie: this.cookieHeader(), ...(init.headers as Record<string, string>) }, redirect: "manual" });
+    this.keep(res);
+    return res;
   }
 
   get(path: string) {

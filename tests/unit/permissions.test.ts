@@ -28,3 +28,20 @@ describe("project permissions", () => {
     expect(canOnProject(rel, "tick_checklist")).toBe(false);
   });
 });
+
+describe("money permissions", () => {
+  it("lets the lead manage money, the owning client see, accept and pay, and crew nothing", () => {
+    const lead = { role: "lead" as const, assigned: false, owner: false };
+    const crew = { role: "crew" as const, assigned: true, owner: false };
+    const client = { role: "client" as const, assigned: false, owner: true };
+    expect(canOnProject(lead, "manage_money")).toBe(true);
+    expect(canOnProject(lead, "see_money")).toBe(true);
+    // Accepting and paying are the client's own acts: not even the lead does them in their place.
+    expect(canOnProject(lead, "accept_and_pay")).toBe(false);
+    for (const a of ["see_money", "manage_money", "accept_and_pay"] as const) expect(canOnProject(crew, a)).toBe(false);
+    expect(canOnProject(client, "see_money")).toBe(true);
+    expect(canOnProject(client, "accept_and_pay")).toBe(true);
+    expect(canOnProject(client, "manage_money")).toBe(false);
+    expect(canOnProject({ ...client, owner: false }, "accept_and_pay")).toBe(false);
+  });
+});

@@ -11,16 +11,45 @@ import { PhotoStrip } from "./_components/photo-strip";
 import { WaterWords } from "./_components/water-words";
 import { ClientActions } from "./_components/client-actions";
 import { NextStep } from "./_components/next-step";
+import { listClientOpenInvoices } from "@/db/queries/money-overview";
+import { PayButton } from "@/components/money/pay-button";
+import { formatMoney } from "@/lib/money/amounts";
+import { INVOICE_KIND_LABELS } from "@/lib/money/schedule";
 
 export const metadata: Metadata = { title: "Your tanks" };
 export const dynamic = "force-dynamic";
 
 export default async function PortalPage() {
   const user = await requirePageUser("client");
-  const home = await getClientHome(user);
+  const [home, toPay] = await Promise.all([getClientHome(user), listClientOpenInvoices(user.id)]);
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-4">
       <h1 className="text-2xl font-bold tracking-tight">Your aquarium projects</h1>
+      {toPay.length > 0 && (
+        <section className="flex flex-col gap-2 rounded-2xl border border-line bg-card p-5" aria-labelledby="to-pay" data-testid="portal-invoices">
+          <h2 id="to-pay" className="text-lg font-semibold">
+            Invoices to pay
+          </h2>
+          <ul className="flex flex-col divide-y divide-line">
+            {toPay.map((i) => (
+              <li key={i.id} className="flex flex-wrap items-center gap-3 py-2 text-sm">
+                <Link href={`/projects/${i.projectId}/money`} className="num font-semibold hover:underline">
+                  No. {i.number}
+                </Link>
+                <span>
+                  {INVOICE_KIND_LABELS[i.kind]}
+                  {i.period ? ` ${i.period}` : ""} · {i.projectTitle}
+                </span>
+                <span className="num">{formatMoney(i.totalMinor, i.currency)}</span>
+                <span className="text-muted">due {i.dueOn}</span>
+                <span className="ml-auto">
+                  <PayButton invoiceId={i.id} />
+                </span>
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
       {home.length === 0 ? (
         <EmptyState title="No projects yet">Your installer will add your project here once it's booked.</EmptyState>
       ) : (

@@ -1,6 +1,14 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { prepareHistory } from "@/lib/cycling/cycle-history";
+import { DEFAULT_CYCLE_RULES } from "@/lib/cycling/cycle-rules";
+import {
+  firstValueSince,
+  isStalled,
+  isZeroPair,
+  latestValue,
+  prepareHistory,
+  showsAmmoniaOrNitrite,
+} from "@/lib/cycling/cycle-history";
 import type { WaterTest } from "@/lib/cycling/readings";
 import { at, reading, T0 } from "./cycle-fixtures";
 
@@ -53,5 +61,158 @@ describe("prepareHistory", () => {
     const kept = reading(at(5), { ammoniaMgL: 1 });
     const input = [reading(at(1), { ammoniaMgL: 1 }), reading(at(6), { voided: true }), kept];
     expect(prepareHistory(input, at(2).getTime()).readings).toEqual([kept]);
+  });
+});
+
+describe("isStalled: the stall rule", () => {
+  const rules = DEFAULT_CYCLE_RULES;
+  const step = DEFAULT_CYCLE_RULES.stallChangeMgL;
+  const stalled = (readings: WaterTest[], ref: Date) =>
+    isStalled(prepareHistory(readings), ref.getTime(), rules.stallDays, rules.stallChangeMgL);
+  // One test a day from day 0 to `days`, nitrite held at 2 mg/L, ammonia at `ammonia`.
+  const flat = (days: number, ammonia = 0) =>
+    Array.from({ length: days + 1 }, (_, d) => reading(at(d), { ammoniaMgL: ammonia, nitriteMgL: 2 }));
+
+  it("flat ammonia and nitrite across the whole window is a stall", () => {
+    expect(stalled(flat(12), at(12, 1))).toBe(true);
+  });
+
+  it("a move of exactly the smallest change that counts is progress, not a stall", () => {
+    const readings = flat(12);
+    readings[6] = reading(at(6), { ammoniaMgL: 0, nitriteMgL: 2 - step });
+    expect(stalled(readings, at(12, 1))).toBe(false);
+  });
+
+  it("a move just under the smallest change that counts is still a stall", () => {
+    const readings = flat(12);
+    readings[6] = reading(at(6), { ammoniaMgL: 0, nitriteMgL: 2 - step / 2 });
+    expect(stalled(readings, at(12, 1))).toBe(true);
+  });
+
+  it("falling ammonia prevents a stall even when nitrite holds still", () => {
+    const readings = flat(12, 2);
+    readings[12] = reading(at(12), { ammoniaMgL: 2 - step, nitriteMgL: 2 });
+    expect(stalled(readings, at(12, 1))).toBe(false);
+  });
+
+  it("ammonia moving in a test that skipped nitrite still counts as change", () => {
+    const readings = flat(12, 1);
+    readings[8] = reading(at(8), { ammoniaMgL: 1 + step });
+    expect(stalled(readings, at(12, 1))).toBe(false);
+  });
+
+  it("needs a test at or before the window's start: exactly at the start counts", () => {
+    // Window of 10 days back from day 12 08:00 starts at day 2 08:00.
+    const fromWindowStart = flat(12).slice(2);
+    expect(stalled(fromWindowStart, at(12))).toBe(true);
+    const fromAMinuteLater = flat(12).slice(2);
+    fromAMinuteLater[0] = reading(at(2, 1 / 60), { ammoniaMgL: 0, nitriteMgL: 2 });
+    expect(stalled(fromAMinuteLater, at(12))).toBe(false);
+  });
+
+  it("ignores a change that lies wholly before the baseline test", () => {
+    const readings = flat(12);
+    readings[0] = reading(at(0), { ammoniaMgL: 4, nitriteMgL: 0 });
+    expect(stalled(readings, at(12))).toBe(true);
+  });
+
+  it("needs at least one test inside the window", () => {
+    // Flat tests on days 0 to 2, then nothing: the window back from day 13 holds no test.
+    expect(stalled(flat(2), at(13))).toBe(false);
+  });
+
+  it("a newest reading of zero ammonia and zero nitrite is not a stall (it awaits confirmation)", () => {
+    const zeros = Array.from({ length: 13 }, (_, d) => reading(at(d), { ammoniaMgL: 0, nitriteMgL: 0 }));
+    expect(stalled(zeros, at(12, 1))).toBe(false);
+    // A tiny trace below the step, then zero/zero: not a stall either.
+    const traces = zeros.map((r, d) => (d < 12 ? { ...r, nitriteMgL: step / 5 } : r));
+    expect(stalled(traces, at(12, 1))).toBe(false);
+  });
+
+  it("skips tests that read neither ammonia nor nitrite", () => {
+    const readings = [...flat(12), reading(at(12, 1), { nitrateMgL: 40 })];
+    expect(stalled(readings, at(12, 2))).toBe(true);
+  });
+});
+
+describe("latestValue and firstValueSince", () => {
+  const h = () =>
+    prepareHistory([
+      reading(at(0), { ammoniaMgL: 2 }),
+      reading(at(1), { ammoniaMgL: 1, nitriteMgL: 0.5 }),
+      reading(at(2), { nitriteMgL: 1 }),
+    ]);
+
+  it("finds the newest tested value of each analyte, skipping tests that didn't read it", () => {
+    expect(latestValue(h(), "ammonia")).toEqual({ value: 1, time: at(1).getTime() });
+    expect(latestValue(h(), "nitrite")).toEqual({ value: 1, time: at(2).getTime() });
+    expect(latestValue(h(), "nitrate")).toBeUndefined();
+  });
+
+  it("finds the oldest tested value at or after a time", () => {
+    expect(firstValueSince(h(), "ammonia", at(0).getTime())).toEqual({ value: 2, time: at(0).getTime() });
+    expect(firstValueSince(h(), "ammonia", at(0, 1).getTime())).toEqual({ value: 1, time: at(1).getTime() });
+    expect(firstValueSince(h(), "nitrite", at(2).getTime())).toEqual({ value: 1, time: at(2).getTime() });
+    expect(firstValueSince(h(), "nitrite", at(2, 1).getTime())).toBeUndefined();
+  });
+});
+
+describe("showsAmmoniaOrNitrite and isZeroPair", () => {
+  it("a zero pair needs both ammonia and nitrite tested and at zero", () => {
+    expect(isZeroPair(reading(at(0), { ammoniaMgL: 0, nitriteMgL: 0 }))).toBe(true);
+    expect(isZeroPair(reading(at(0), { ammoniaMgL: 0 }))).toBe(false);
+    expect(isZeroPair(reading(at(0), { nitriteMgL: 0 }))).toBe(false);
+    expect(isZeroPair(reading(at(0), { ammoniaMgL: 0, nitriteMgL: 0.25 }))).toBe(false);
+  });
+
+  it("either analyte above zero shows", () => {
+    expect(showsAmmoniaOrNitrite(reading(at(0), { ammoniaMgL: 0.25 }))).toBe(true);
+    expect(showsAmmoniaOrNitrite(reading(at(0), { nitriteMgL: 0.25 }))).toBe(true);
+    expect(showsAmmoniaOrNitrite(reading(at(0), { ammoniaMgL: 0, nitriteMgL: 0, nitrateMgL: 5 }))).toBe(false);
+  });
+});
+
+describe("prepareHistory: bad input and order", () => {
+  it("throws RangeError for a negative, infinite or non-numeric value in any analyte", () => {
+    for (const key of ["ammoniaMgL", "nitriteMgL", "nitrateMgL"] as const) {
+      expect(() => prepareHistory([reading(at(0), { [key]: -0.25 })])).toThrow(RangeError);
+      expect(() => prepareHistory([reading(at(0), { [key]: Infinity })])).toThrow(RangeError);
+      expect(() => prepareHistory([reading(at(0), { [key]: Number.NaN })])).toThrow(RangeError);
+    }
+    expect(() => prepareHistory([reading(at(0), { nitrateMgL: -1 })])).toThrow(
+      /has an impossible nitrateMgL value \(-1\)/,
+    );
+  });
+
+  it("throws for an invalid time even on a reading before the start", () => {
+    expect(() => prepareHistory([reading(new Date(Number.NaN))], at(5).getTime())).toThrow(/has no valid time/);
+  });
+
+  it("keeps a reading taken exactly at the start", () => {
+    const first = reading(at(2));
+    expect(prepareHistory([reading(at(1)), first], at(2).getTime()).readings).toEqual([first]);
+  });
+
+  it("orders readings that arrive in time order but with tied times out of id order", () => {
+    const input = [plain("b", T0), plain("a", T0), plain("c", T0 + 1)];
+    const h = prepareHistory(input);
+    expect(h.readings.map((r) => r.id)).toEqual(["a", "b", "c"]);
+    expect(h.times).toEqual([T0, T0, T0 + 1]);
+  });
+
+  it("returns input already in order as it is, times included", () => {
+    const input = [plain("a", T0), plain("b", T0), plain("c", T0 + 5)];
+    const h = prepareHistory(input);
+    expect(h.readings).toEqual(input);
+    expect(h.times).toEqual([T0, T0, T0 + 5]);
+  });
+
+  it("sorts unordered input of every size, with times kept beside their readings", () => {
+    for (const n of [2, 3, 5, 8, 9]) {
+      const input = Array.from({ length: n }, (_, i) => plain(`id${i}`, T0 + (n - i) * 1000));
+      const h = prepareHistory(input);
+      expect(h.readings.map((r) => r.id)).toEqual(input.map((r) => r.id).reverse());
+      expect(h.times).toEqual(input.map((r) => r.takenAt.getTime()).reverse());
+    }
   });
 });

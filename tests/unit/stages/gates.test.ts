@@ -8,6 +8,7 @@ const none: GateFacts = {
   leak: { filled: false, after24hPassed: null },
   cycle: null,
   stockingBatches: 0,
+  deposit: "not_invoiced",
 };
 const all: GateFacts = {
   survey: { complete: true },
@@ -16,6 +17,7 @@ const all: GateFacts = {
   leak: { filled: true, after24hPassed: true },
   cycle: { ready: true, reasons: [] },
   stockingBatches: 1,
+  deposit: "paid",
 };
 
 describe("checkGate", () => {
@@ -34,8 +36,15 @@ describe("checkGate", () => {
   });
 
   it("tells a stale load approval from a missing one", () => {
-    expect(reasonsInto("aquascape", none)).toEqual(["The load check hasn't been approved by the lead."]);
+    expect(reasonsInto("aquascape", { ...none, deposit: "paid" })).toEqual(["The load check hasn't been approved by the lead."]);
     expect(reasonsInto("aquascape", { ...all, loadApproval: "stale" })).toEqual(["The load check was approved for an earlier design; approve it again."]);
+  });
+
+  it("needs the deposit paid for aquascape, unless the schedule asks none", () => {
+    expect(reasonsInto("aquascape", none)).toEqual(["The load check hasn't been approved by the lead.", "The deposit isn't paid yet: the client hasn't accepted a quote."]);
+    expect(reasonsInto("aquascape", { ...all, deposit: "unpaid" })).toEqual(["The deposit isn't paid yet: glass is ordered and install day booked once it is."]);
+    expect(reasonsInto("aquascape", { ...all, deposit: "not_required" })).toEqual([]);
+    expect(reasonsInto("aquascape", all)).toEqual([]);
   });
 
   it("counts the aquascape items left, and refuses an empty checklist", () => {
@@ -62,16 +71,18 @@ describe("checkGate", () => {
   it("checks every gate on a jump, labelling each by stage", () => {
     const r = checkGate({ from: "site_survey", to: "fill_leak_test", facts: { ...none, survey: { complete: true } } });
     expect(r.open).toBe(false);
-    expect(r.reasons).toHaveLength(2);
+    expect(r.reasons).toHaveLength(3);
     expect(r.reasons[0]).toMatch(/^Into Aquascape: /);
-    expect(r.reasons[1]).toMatch(/^Into Fill & leak test: /);
+    expect(r.reasons[1]).toMatch(/^Into Aquascape: The deposit/);
+    expect(r.reasons[2]).toMatch(/^Into Fill & leak test: /);
   });
 });
 
 describe("nextStageNeeds and helpers", () => {
   it("reports the next gate, or null at the last stage", () => {
     expect(nextStageNeeds("site_survey", all)).toEqual([]);
-    expect(nextStageNeeds("stand_load_check", none)).toEqual(["The load check hasn't been approved by the lead."]);
+    expect(nextStageNeeds("stand_load_check", { ...none, deposit: "paid" })).toEqual(["The load check hasn't been approved by the lead."]);
+    expect(nextStageNeeds("stand_load_check", { ...all, deposit: "unpaid" })?.[0]).toMatch(/^The deposit isn't paid yet/);
     expect(nextStageNeeds("in_service", none)).toBeNull();
   });
 

@@ -109,3 +109,107 @@ describe("rectangleFitsRotated (Carver 1956)", () => {
     expect(rectangleFitsRotated(2040, 810, 1000, 900)).toBe(false); // thinner side wider than the door
   });
 });
+
+describe("checkAccess: edges", () => {
+  /**
+   * Best tilt for a p × q cross-section in a w × h opening, found independently of the code: the
+   * best tilt is where the spare width equals the spare height (one grows, the other shrinks with
+   * the angle), found by bisection to machine precision.
+   */
+  function exactTiltClearance(w: number, h: number, p: number, q: number): number {
+    const spareW = (t: number) => w - (p * Math.cos(t) + q * Math.sin(t));
+    const spareH = (t: number) => h - (p * Math.sin(t) + q * Math.cos(t));
+    let lo = 0;
+    let hi = Math.PI / 2;
+    for (let i = 0; i < 200; i++) {
+      const mid = (lo + hi) / 2;
+      if (spareW(mid) < spareH(mid)) lo = mid;
+      else hi = mid;
+    }
+    return spareW(lo);
+  }
+
+  it("an exact upright fit is upright with 0 mm to spare, not on edge", () => {
+    const r = checkAccess({ itemLengthMm: 1800, itemWidthMm: 800, itemHeightMm: 700, doorWidthMm: 800, doorHeightMm: 2000 });
+    expect(r).toEqual({ fits: true, way: "upright", clearanceMm: 0, message: "Fits upright with 0 mm to spare." });
+    const exactHeight = checkAccess({ itemLengthMm: 1800, itemWidthMm: 600, itemHeightMm: 2000, doorWidthMm: 800, doorHeightMm: 2000 });
+    expect(exactHeight.way).toBe("upright");
+  });
+
+  it("upright uses the shorter plan side, whichever way length and width are entered", () => {
+    const r = checkAccess({ itemLengthMm: 600, itemWidthMm: 1800, itemHeightMm: 700, doorWidthMm: 800, doorHeightMm: 2000 });
+    expect(r.way).toBe("upright");
+    expect(r.clearanceMm).toBe(200);
+  });
+
+  it("upright is limited by the tighter of width and height", () => {
+    // 600 mm deep in 800 mm (200 spare), 1900 mm tall in 2000 mm (100 spare): 100 mm it is.
+    const r = checkAccess({ itemLengthMm: 1800, itemWidthMm: 600, itemHeightMm: 1900, doorWidthMm: 800, doorHeightMm: 2000 });
+    expect(r.clearanceMm).toBe(100);
+  });
+
+  it("on edge takes the better of the two ways to turn the cross-section", () => {
+    // A low deep tank, 2000 × 1000 × 700, in a 900 × 1100 door: 1000 deep won't pass 900 upright. On its
+    // end (the 2000 mm length leads) the 700 × 1000 cross-section goes 700 across: min(200, 100) = 100 mm.
+    const low = checkAccess({ itemLengthMm: 2000, itemWidthMm: 1000, itemHeightMm: 700, doorWidthMm: 900, doorHeightMm: 1100 });
+    expect(low.way).toBe("on edge");
+    expect(low.clearanceMm).toBe(100);
+    // A tall tank, 2000 × 700 × 1200, in a 1300 × 1100 door: 1200 tall won't pass 1100 upright. Laid on its
+    // back the 1200 mm height goes across: min(1300 − 1200, 1100 − 700) = 100 mm.
+    const tall = checkAccess({ itemLengthMm: 2000, itemWidthMm: 700, itemHeightMm: 1200, doorWidthMm: 1300, doorHeightMm: 1100 });
+    expect(tall.way).toBe("on edge");
+    expect(tall.clearanceMm).toBe(100);
+  });
+
+  it("the tilt search finds the best angle, not just the nearest sampled one", () => {
+    // The panel above: the code scans 3,600 angles then refines; without the refinement it is about 0.4 mm short.
+    const r = checkAccess({ itemLengthMm: 2300, itemWidthMm: 20, itemHeightMm: 2100, doorWidthMm: 810, doorHeightMm: 2040 });
+    const exact = exactTiltClearance(810, 2040, 2100, 20);
+    expect(r.clearanceMm).toBeCloseTo(exact, 6);
+    expect(r.message).toBe(
+      `Fits only tilted through the door on the diagonal, with about ${Math.floor(exact)} mm to spare at best. Plan the move and have enough people.`,
+    );
+  });
+
+  it("rounds spare room down, never up: 199.6 mm spare reads 199 mm", () => {
+    const r = checkAccess({ itemLengthMm: 1800, itemWidthMm: 600.4, itemHeightMm: 700, doorWidthMm: 800, doorHeightMm: 2000 });
+    expect(r.clearanceMm).toBeCloseTo(199.6, 9);
+    expect(r.message).toBe("Fits upright with 199 mm to spare.");
+    const nearlyWhole = checkAccess({ itemLengthMm: 1800, itemWidthMm: 600.001, itemHeightMm: 700, doorWidthMm: 800, doorHeightMm: 2000 });
+    expect(nearlyWhole.message).toBe("Fits upright with 199 mm to spare.");
+  });
+
+  it("float noise just under a whole millimetre doesn't lose that millimetre", () => {
+    // 800.3 − 600.1 is 200.19999999999993 in binary floating point; it should read 200 mm.
+    const r = checkAccess({ itemLengthMm: 1800, itemWidthMm: 600.1, itemHeightMm: 700, doorWidthMm: 800.3, doorHeightMm: 2000 });
+    expect(r.message).toBe("Fits upright with 200 mm to spare.");
+    const exactNoise = checkAccess({ itemLengthMm: 1800, itemWidthMm: 0.3, itemHeightMm: 700, doorWidthMm: 0.6 + 199.7, doorHeightMm: 2000 });
+    expect(exactNoise.message).toBe("Fits upright with 200 mm to spare.");
+  });
+
+  it("rounds a shortfall up, never down: 190.4 mm too big reads 191 mm", () => {
+    const r = checkAccess({ itemLengthMm: 2400, itemWidthMm: 1000.4, itemHeightMm: 1900, doorWidthMm: 810, doorHeightMm: 2040 });
+    expect(r.fits).toBe(false);
+    expect(r.message).toMatch(/about 191 mm too big/);
+  });
+
+  it("names the side that isn't a positive number", () => {
+    const ok = { itemLengthMm: 1, itemWidthMm: 1, itemHeightMm: 1, doorWidthMm: 1, doorHeightMm: 1 };
+    expect(() => checkAccess({ ...ok, doorHeightMm: -5 })).toThrow(new RangeError("doorHeightMm must be a positive number of millimetres"));
+    expect(() => checkAccess({ ...ok, itemWidthMm: Number.NaN })).toThrow(RangeError);
+    expect(() => checkAccess({ ...ok, doorWidthMm: Infinity })).toThrow(RangeError);
+  });
+});
+
+describe("rectangleFitsRotated: boundaries", () => {
+  it("an exact square-on fit fits", () => {
+    expect(rectangleFitsRotated(2040, 810, 2040, 810)).toBe(true);
+  });
+
+  it("Carver's sum exactly 2 fits", () => {
+    // a = b: ((2a)/(p+q))² + 0 = 2 when p + q = a√2; with q → thin, p = a√2 − q. Use a = b = 10, p = 12, q = 2:
+    // (20/14)² + 0 = 2.0408… ≥ 2 fits; p = 13, q = 2: (20/15)² = 1.777… < 2 doesn't.
+    expect(rectangleFitsRotated(10, 10, 12, 2)).toBe(true);
+    expect(rectangleFitsRotated(10, 10, 13, 2)).toBe(false);
+  });
+});

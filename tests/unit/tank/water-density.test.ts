@@ -32,6 +32,17 @@ describe("freshWaterDensity (Tanaka et al. 2001)", () => {
     expect(freshWaterDensity(3.983035)).toBeGreaterThan(freshWaterDensity(5));
   });
 
+  it("worked by hand from Tanaka et al. (2001) eq. (1) at 40 °C, where every coefficient shows", () => {
+    // a5 · (1 − (40 − 3.983035)² · (40 + 301.797) / (522528.9 · (40 + 69.34881)))
+    //   = 999.97495 · (1 − 1297.22177 · 341.797 / 57137913.41) = 999.97495 · (1 − 0.00775994) = 992.215209 kg/m³
+    expect(freshWaterDensity(40)).toBeCloseTo(992.215209, 6);
+  });
+
+  it("peaks at 3.983035 °C to the fourth decimal place (Tanaka 2001, eq. (1): a1 = −3.983035 °C)", () => {
+    expect(freshWaterDensity(3.983035)).toBeGreaterThan(freshWaterDensity(3.983035 + 1e-4));
+    expect(freshWaterDensity(3.983035)).toBeGreaterThan(freshWaterDensity(3.983035 - 1e-4));
+  });
+
   it("falls steadily across aquarium temperatures (property)", () => {
     fc.assert(
       fc.property(fc.double({ min: 4, max: 39, noNaN: true }), (t) => {

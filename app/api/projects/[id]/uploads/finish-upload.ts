@@ -1,7 +1,7 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
-import sharp from "sharp";
-import { checkUpload, isImageType, sniffType } from "@/lib/install/upload-rules";
+import sharp, { type Metadata } from "sharp";
+import { MAX_UPLOAD_PIXELS, checkUpload, isImageType, pdfRefusal, pixelRefusal, sniffType } from "@/lib/install/upload-rules";
 import { badRequest, unprocessable } from "@/server/errors";
 import { putObject } from "@/server/storage";
 import type { UploadBody } from "./upload.schema";
@@ -26,14 +26,47 @@ export function vetBytes(bytes: Uint8Array, claimed: string) {
   }
 }
 
+const DAMAGED = "The photo couldn't be read; it may be damaged. Take it again or export it as JPEG.";
+
+/**
+ * The bytes to store. The first bytes must match the type; a PDF must look like a whole PDF and
+ * not a web page behind a PDF header; a photo's size in pixels is read from its header before
+ * anything is decoded, then the photo is re-encoded, which drops whatever was appended after the
+ * image (such as HTML) and the metadata (a phone's location among it).
+ */
+export async function prepareFile(bytes: Uint8Array, claimed: string): Promise<Uint8Array> {
+  vetBytes(bytes, claimed);
+  if (!isImageType(claimed)) {
+    const refusal = pdfRefusal(bytes);
+    if (refusal) throw unprocessable(refusal);
+    return bytes;
+  }
+  let meta: Metadata;
+  try {
+    meta = await sharp(bytes).metadata();
+  } catch {
+    throw unprocessable(DAMAGED);
+  }
+  const tooBig = pixelRefusal(meta.width ?? 0, meta.height ?? 0);
+  if (tooBig) throw unprocessable(tooBig);
+  try {
+    const image = sharp(bytes, { limitInputPixels: MAX_UPLOAD_PIXELS }).rotate();
+    const out =
+      claimed === "image/png" ? image.png({ compressionLevel: 9 }) : claimed === "image/webp" ? image.webp({ quality: 90 }) : image.jpeg({ quality: 90 });
+    return new Uint8Array(await out.toBuffer());
+  } catch {
+    throw unprocessable(DAMAGED);
+  }
+}
+
 /** Makes and stores a small preview of a photo; PDFs get none. Returns the preview's key. */
 export async function storeThumbnail(key: string, bytes: Uint8Array, contentType: string): Promise<string | null> {
   if (!isImageType(contentType)) return null;
   let thumb: Buffer;
   try {
-    thumb = await sharp(bytes, { limitInputPixels: 80_000_000 }).rotate().resize(480, 480, { fit: "inside", withoutEnlargement: true }).webp({ quality: 72 }).toBuffer();
+    thumb = await sharp(bytes, { limitInputPixels: MAX_UPLOAD_PIXELS }).resize(480, 480, { fit: "inside", withoutEnlargement: true }).webp({ quality: 72 }).toBuffer();
   } catch {
-    throw unprocessable("The photo couldn't be read; it may be damaged. Take it again or export it as JPEG.");
+    throw unprocessable(DAMAGED);
   }
   const thumbKey = `${key}-thumb`;
   await putObject(thumbKey, thumb, "image/webp");

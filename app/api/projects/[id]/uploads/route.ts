@@ -6,7 +6,7 @@ import { presignPut, putObject } from "@/server/storage";
 import { badRequest } from "@/server/errors";
 import { MAX_UPLOAD_BYTES } from "@/lib/install/upload-rules";
 import { uploadSchema } from "./upload.schema";
-import { newObjectKey, storeThumbnail, vetBytes, vetUpload } from "./finish-upload";
+import { newObjectKey, prepareFile, storeThumbnail, vetUpload } from "./finish-upload";
 
 // Room for the form's boundaries and text fields around the file itself.
 const FORM_OVERHEAD_BYTES = 64 * 1024;
@@ -37,9 +37,9 @@ export const POST = projectRoute(
   };
 
   if (file) {
-    const bytes = new Uint8Array(await file.arrayBuffer());
-    if (bytes.byteLength > MAX_UPLOAD_BYTES) throw badRequest("The file is too large.", { sizeBytes: "The file is too large." });
-    vetBytes(bytes, vetted.contentType);
+    const sent = new Uint8Array(await file.arrayBuffer());
+    if (sent.byteLength > MAX_UPLOAD_BYTES) throw badRequest("The file is too large.", { sizeBytes: "The file is too large." });
+    const bytes = await prepareFile(sent, vetted.contentType);
     await putObject(base.key, bytes, vetted.contentType);
     const thumbKey = await storeThumbnail(base.key, bytes, vetted.contentType);
     const attachment = await createPendingAttachment({ ...base, sizeBytes: bytes.byteLength, status: "ready", thumbKey });

@@ -1,0 +1,116 @@
+/**
+ * Every route handler in app/api, found on disk so a new route is covered without touching the
+ * tests, with what its wrapper says about access, and a sample body that its schema accepts.
+ */
+import { readdirSync, statSync } from "node:fs";
+import { join, relative } from "node:path";
+import { fileURLToPath } from "node:url";
+import { randomUUID } from "node:crypto";
+import { routeAccess, type RouteAccess } from "@/server/route";
+import { canOnProject, canSeeProject, type Relation } from "@/lib/auth/permissions";
+import type { Role } from "@/lib/auth/roles";
+import { lightDesign } from "../unit/survey/fixtures";
+
+const ROOT = fileURLToPath(new URL("../..", import.meta.url));
+// The auth library's own endpoints check their own CSRF token; the walker unit test names them too.
+const OWN_CHECKS = new Set(["app/api/auth/[...nextauth]/route.ts"]);
+const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
+
+export type Handler = { method: string; path: string; file: string; access: RouteAccess; mutating: boolean };
+
+function walk(dir: string, out: string[] = []): string[] {
+  for (const name of readdirSync(dir)) {
+    const p = join(dir, name);
+    if (statSync(p).isDirectory()) walk(p, out);
+    else if (/^route\.tsx?$/.test(name)) out.push(p);
+  }
+  return out;
+}
+
+export async function listHandlers(): Promise<Handler[]> {
+  const out: Handler[] = [];
+  for (const abs of walk(join(ROOT, "app/api")).sort()) {
+    const file = relative(ROOT, abs).split("\\").join("/");
+    if (OWN_CHECKS.has(file)) continue;
+    const mod = (await import(abs)) as Record<string, unknown>;
+    const path = "/" + file.replace(/^app\//, "").replace(/\/route\.tsx?$/, "");
+    for (const [method, fn] of Object.entries(mod)) {
+      const access = routeAccess(fn);
+      if (!access) continue;
+      out.push({ method, path, file, access, mutating: MUTATING.has(method) });
+    }
+  }
+  return out;
+}
+
+/** The path with `[id]` as the project and any other segment as an id that doesn't exist. */
+export function urlFor(h: Handler, projectId: string): string {
+  return h.path.replace(/\[([^\]]+)\]/g, (_m, name: string) => (name === "id" && h.path.startsWith("/api/projects/") ? projectId : name === "token" ? "t".repeat(32) : randomUUID()));
+}
+
+const NOW_ISH = "2026-01-05T10:00";
+
+/** A body each route's schema accepts: sent only to callers who must be refused before it is read. */
+export const SAMPLE_BODIES: Record<string, unknown> = {
+  "PATCH /api/checklist-items/[id]": { label: "Check the level twice" },
+  "POST /api/checklist-items": { stage: "site_survey", label: "Check the level", needsPhoto: false },
+  "POST /api/invitations/accept": { token: "t".repeat(32), password: "long-enough-pass", confirm: "long-enough-pass" },
+  "PATCH /api/me/contact": { name: "Pat Sample", phone: "" },
+  "PUT /api/me/notifications": { message: true },
+  "PATCH /api/me/units": { unitSystem: "metric" },
+  "POST /api/people": { name: "New Person", email: "new-person@fixture.test", role: "crew", phone: "" },
+  "POST /api/projects": {
+    clientMode: "new",
+    clientId: "",
+    clientName: "New Client",
+    clientEmail: "new-client@fixture.test",
+    title: "Matrix tank",
+    siteAddress: "1 Test Row",
+    siteTown: "Testbury",
+    targetInstallDate: "",
+    leadId: "",
+    crewIds: [],
+    tankSummary: "",
+  },
+  "PATCH /api/projects/[id]": { version: 1, title: "A new title" },
+  "POST /api/projects/[id]/checklist/ticks": { itemId: randomUUID(), done: true, clientKey: "matrix-key-1" },
+  "PUT /api/projects/[id]/design": lightDesign(),
+  "POST /api/projects/[id]/doses/[doseId]/void": { reason: "entered twice" },
+  "POST /api/projects/[id]/doses": { dosedAt: NOW_ISH, targetMgL: 2 },
+  "POST /api/projects/[id]/leak-checks": { kind: "filled", passed: true },
+  "POST /api/projects/[id]/load-approval": { engineerReference: null },
+  "DELETE /api/projects/[id]/load-approval": { reason: "the design changed" },
+  "POST /api/projects/[id]/load-approval/revoke": { reason: "the design changed" },
+  "PATCH /api/projects/[id]/materials/[materialId]": { loaded: true },
+  "POST /api/projects/[id]/materials": { label: "Gravel", quantity: 2, unit: "bags" },
+  "POST /api/projects/[id]/messages": { body: "Hello there" },
+  "POST /api/projects/[id]/move": { toStage: "stand_load_check", version: 1 },
+  "PATCH /api/projects/[id]/notes/[noteId]": { shared: true },
+  "POST /api/projects/[id]/notes": { body: "A note", shared: false },
+  "POST /api/projects/[id]/stocking-batches": { description: "Six small fish", fishCount: 6 },
+  "PUT /api/projects/[id]/survey": { notes: "Looked at the room" },
+  "POST /api/projects/[id]/uploads": { fileName: "tank.jpg", contentType: "image/jpeg", sizeBytes: 1000, stage: "site_survey" },
+  "POST /api/projects/[id]/visits": { kind: "install day", startsAt: "2027-01-05T10:00", durationMinutes: 60 },
+  "POST /api/projects/[id]/water-tests/[testId]/correct": { takenAt: NOW_ISH, ammoniaMgL: 0, reason: "typed the wrong figure" },
+  "POST /api/projects/[id]/water-tests/[testId]/void": { reason: "entered twice" },
+  "POST /api/projects/[id]/water-tests": { takenAt: NOW_ISH, ammoniaMgL: 0 },
+  "PUT /api/settings/cycle-rules": { stallDays: 10 },
+};
+
+export const keyOf = (h: Handler) => `${h.method} ${h.path}`;
+
+export type Caller = { name: string; role: Role | null; relation: Relation | null; email?: string };
+
+/**
+ * What a caller must get from a handler before its body is looked at: 401, 404 or 403, or
+ * "allowed" when the wrapper lets them through to the body.
+ */
+export function expectedRefusal(h: Handler, caller: Caller): 401 | 403 | 404 | "allowed" {
+  const a = h.access;
+  if (a.kind === "public") return "allowed";
+  if (!caller.role) return 401;
+  if (a.kind === "user") return a.roles.length && !a.roles.includes(caller.role) ? 403 : "allowed";
+  const rel = caller.relation!;
+  if (!canSeeProject(rel)) return 404;
+  return canOnProject(rel, a.action) ? "allowed" : 403;
+}
