@@ -18,7 +18,8 @@ afterAll(() => {
   sh(`d=$(pg_data_dir ${NAME}); b=$(pg_bin_dir); [ -f "$d/PG_VERSION" ] && as_pg "$b/pg_ctl" -D "$d" -m fast -w stop >/dev/null 2>&1; rm -rf "$d"`);
 });
 
-describe("backup and restore", () => {
+// initdb, pg_dump and pg_restore take a while on a loaded machine (a limit, not a timing).
+describe("backup and restore", { timeout: 300_000 }, () => {
   it("restores a backup into a fresh cluster with every row, and finds every listed object", async () => {
     const team = await makeTeam("cycling");
     const folder = mkdtempSync(join(tmpdir(), "tankwright-backup-"));

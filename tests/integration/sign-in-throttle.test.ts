@@ -13,7 +13,8 @@ const PER_ADDRESS = 30;
 const address = () => `2001:db8::${randomUUID().slice(0, 4)}:${randomUUID().slice(0, 4)}`;
 const caller = () => new Session(address());
 
-describe("sign-in throttling", () => {
+// Dozens of real sign-ins, each a scrypt check: generous on a loaded machine (a limit, not a timing).
+describe("sign-in throttling", { timeout: 180_000 }, () => {
   it("pauses an account after repeated wrong passwords, from any address, with 429 and Retry-After", async () => {
     const crew = await makeUser("crew");
     for (let i = 0; i < PER_ACCOUNT; i++) expect(await caller().signIn(crew.email, "wrong-password")).toBe(401);
