@@ -15,6 +15,16 @@ const schema = z.object({
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   NEXTAUTH_SECRET: z.string().min(16).optional(),
   APP_URL: z.string().url().default("http://localhost:3000"),
+  /** next-auth's name for the public address; when set it wins over APP_URL for sign-in cookies. */
+  NEXTAUTH_URL: z.string().url().optional(),
+  /**
+   * How many reverse proxies in front of the app append to X-Forwarded-For. 0 trusts none of the
+   * header's entries beyond the one the app server itself adds for the connection.
+   */
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(5).default(0),
+  /** Wrong sign-ins allowed per account, and per address, before a pause (see server/sign-in-throttle.ts). */
+  SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
+  SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
   SMTP_HOST: z.string().default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().default(1025),
   SMTP_SECURE: bool,
@@ -58,6 +68,14 @@ export function env(): Env {
   cached = parsed.data;
   return cached;
 }
+
+/** The address people reach the app at; HTTPS here turns on Secure cookies and HSTS. */
+export function publicUrl(): string {
+  const e = env();
+  return e.NEXTAUTH_URL ?? e.APP_URL;
+}
+
+export const servedOverHttps = () => publicUrl().startsWith("https://");
 
 /** The secret that signs session tokens: required in production, a fixed dev value otherwise. */
 export function authSecret(): string {

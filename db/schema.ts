@@ -12,3 +12,4 @@ export * from "./schema/test-kits";
 export * from "./schema/money";
 export * from "./schema/message-reads";
 export * from "./schema/livestock";
+export * from "./schema/sign-in-limits";

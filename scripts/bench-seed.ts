@@ -2,7 +2,7 @@
  * Seeds the benchmark database with 500 invented active projects, their clients and crew, stage
  * events, some surveys, checklist ticks, leak checks and water tests. Run only against a fresh database.
  */
-import bcrypt from "bcryptjs";
+import { hashPassword } from "../lib/auth/passwords";
 import { generateNKeysBetween } from "fractional-indexing";
 import { closeDb, db } from "../db";
 import { checklistItems, checklistTicks, company, leakChecks, projectCrew, projects, siteSurveys, stageEvents, users, waterTests } from "../db/schema";
@@ -29,7 +29,7 @@ const KINDS = ["reef", "planted", "cichlid", "community", "shrimp", "paludarium"
 const FIRST = ["Ada", "Bram", "Cleo", "Dov", "Esme", "Finn", "Gala", "Hugo", "Ines", "Jory", "Kit", "Lune"];
 const LAST = ["Arden", "Bexley", "Corrow", "Dunmore", "Elsby", "Farrow", "Gresham", "Holt", "Inchley", "Jessop"];
 
-const hash = await bcrypt.hash(BENCH_LEAD.password, 10);
+const hash = await hashPassword(BENCH_LEAD.password);
 const d = db();
 await d.insert(company).values({ id: 1, name: "Invented Bench Aquaria", email: "office@bench.test" }).onConflictDoNothing();
 const [lead] = await d.insert(users).values({ name: "Bench Lead", email: BENCH_LEAD.email, role: "lead", passwordHash: hash }).returning();

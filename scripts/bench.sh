@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# Benchmarks the install board on its own PostgreSQL cluster and build: 500 invented projects,
+# Benchmarks on its own PostgreSQL cluster and build: a signed-in trivial read (/api/me/units)
+# against the bare /api/ping, then the install board with 500 invented projects,
 # GET /api/projects against the constant GET /api/ping, the query count per board read, then the
 # cycle evaluation benchmark. Prints figures; enforces none.
 #   BENCH_SECONDS=10 BENCH_CONNECTIONS=4 npm run bench      BENCH_SKIP_BUILD=1 reuses .next-bench
@@ -40,6 +41,10 @@ NODE_ENV=production NEXT_DIST_DIR=$DIST node node_modules/next/dist/bin/next sta
 CHILD_PIDS+=($!)
 wait_http "http://127.0.0.1:$PORT/api/health" 60
 
+echo "== signed-in trivial read against ping"
+"${TSX[@]}" scripts/bench-session.ts
+
+echo
 echo "== board against ping"
 "${TSX[@]}" scripts/bench-board.ts
 

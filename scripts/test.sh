@@ -8,7 +8,8 @@
 #   npm test -- --e2e [files…]                browser tests (all, or the files named)
 #   npm test -- --screens                     screenshots of the main screens into docs/screens
 # Environment: TEST_SLOT=N runs on its own ports, cluster and build folder, so several runs can
-# share a machine; SKIP_BUILD=1 reuses the last build of that slot; SKIP_TYPES=1 skips tsc.
+# share a machine; SKIP_BUILD=1 reuses the last build of that slot; SKIP_TYPES=1 skips tsc;
+# SKIP_LINT=1 skips ESLint (which runs with the unit tests).
 set -euo pipefail
 source "$(dirname "$0")/lib/common.sh"
 
@@ -46,6 +47,12 @@ ensure_node_modules
 if [ -z "${SKIP_TYPES:-}" ]; then
   echo "== types"
   node node_modules/typescript/bin/tsc --noEmit
+fi
+
+if [ "$want_unit" = 1 ] && [ -z "${SKIP_LINT:-}" ]; then
+  echo "== lint"
+  # Errors fail the run; warnings are printed. The cache keeps a re-run to the files that changed.
+  node node_modules/eslint/bin/eslint.js --cache --cache-location .data/eslint-cache --max-warnings=-1 .
 fi
 
 if [ "$want_unit" = 1 ]; then

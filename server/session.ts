@@ -1,18 +1,25 @@
 import "server-only";
-import { getServerSession } from "next-auth";
+import { cookies } from "next/headers";
 import { redirect, notFound as nextNotFound } from "next/navigation";
-import { authOptions } from "./auth-options";
 import { forbidden, unauthorized } from "./errors";
+import { readSessionToken, sessionCookieValue } from "./session-token";
+import { accountState } from "./account-cache";
 import type { Role } from "../lib/auth/roles";
 
 export type SessionUser = { id: string; role: Role; name: string; email: string };
 
-/** The signed-in person, from the signed session token, or null. */
+/**
+ * The signed-in person, or null. Decodes the session cookie (no session rebuild), then checks the
+ * person's current record (cached a few seconds per instance): a deactivated person, or a token
+ * from before their last sign-out, is nobody. Role, name and e-mail come from the record, so a
+ * role change applies from the next request.
+ */
 export async function getSessionUser(): Promise<SessionUser | null> {
-  const session = await getServerSession(authOptions);
-  const u = session?.user;
-  if (!u?.id || !u.role) return null;
-  return { id: u.id, role: u.role, name: u.name ?? "", email: u.email ?? "" };
+  const claims = await readSessionToken(sessionCookieValue(await cookies()));
+  if (!claims) return null;
+  const account = await accountState(claims.uid);
+  if (!account || !account.active || account.sessionVersion !== claims.sv) return null;
+  return { id: account.id, role: account.role, name: account.name, email: account.email };
 }
 
 /** For route handlers and actions: 401 without a session, 403 for a role not in `roles`. */

@@ -63,6 +63,7 @@ export function MoveReasonDialog({ request, onSubmit, onCancel }: { request: Rea
           aria-describedby={error ? `${id}-error` : undefined}
           onChange={(e) => setReason(e.target.value)}
           maxLength={500}
+          // eslint-disable-next-line jsx-a11y/no-autofocus -- a dialog opened on purpose starts on its only field (WAI-ARIA APG dialog pattern)
           autoFocus
         />
         {error && (

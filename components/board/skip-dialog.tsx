@@ -31,6 +31,7 @@ export function SkipDialog({ title, from, to, skipped, onConfirm, onCancel }: { 
         {title} would go from {STAGE_LABELS[from]} straight to {STAGE_LABELS[to]}, past {list}. The client is told about the move.
       </p>
       <div className="mt-4 flex flex-wrap justify-end gap-2">
+        {/* eslint-disable-next-line jsx-a11y/no-autofocus -- a confirmation opens on its safe choice (WAI-ARIA APG alert dialog pattern) */}
         <button type="button" className={buttonStyles.secondary} onClick={onCancel} autoFocus>
           Keep it in {STAGE_LABELS[from]}
         </button>

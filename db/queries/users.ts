@@ -1,6 +1,5 @@
 import "server-only";
 import { createHash, randomBytes } from "node:crypto";
-import bcrypt from "bcryptjs";
 import { and, asc, eq, gt, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "../index";
 import { invitations, notices, users } from "../schema";
@@ -9,27 +8,36 @@ import { invitationEmail } from "../../lib/mail/invitation-email";
 import { ROLE_LABELS, type Role } from "../../lib/auth/roles";
 import { AppError, conflict } from "../../server/errors";
 import { env } from "../../env";
+import { dummyHash, hashPassword, verifyPassword } from "../../lib/auth/passwords";
 
 const INVITATION_DAYS = 7;
-// Compared against when the e-mail is unknown, so the answer's timing doesn't reveal which accounts exist.
-let dummyHash: string | null = null;
-const getDummyHash = () => (dummyHash ??= bcrypt.hashSync("not-a-password", 10));
 
 export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
-export async function hashPassword(password: string): Promise<string> {
-  return bcrypt.hash(password, 10);
-}
+export { hashPassword };
 
-/** The account for these credentials, or null. Never says which part was wrong. */
+/**
+ * The account for these credentials, or null. Never says which part was wrong: an unknown e-mail,
+ * an account without a password and a deactivated account are checked against a hash of the same
+ * cost and answer the same. An old bcrypt hash is replaced by a scrypt one once the password matches.
+ */
 export async function verifyCredentials(email: string, password: string) {
   const [user] = await db()
     .select()
     .from(users)
     .where(sql`lower(${users.email}) = lower(${email})`)
     .limit(1);
-  const ok = await bcrypt.compare(password, user?.passwordHash ?? getDummyHash());
-  return ok && user?.passwordHash ? user : null;
+  const verdict = await verifyPassword(password, user?.passwordHash ?? (await dummyHash()));
+  if (!verdict.ok || !user?.passwordHash || user.deactivatedAt) return null;
+  if (verdict.needsRehash) {
+    const passwordHash = await hashPassword(password);
+    // Only if the hash is still the one just checked, so a password changed meanwhile wins.
+    await db()
+      .update(users)
+      .set({ passwordHash })
+      .where(and(eq(users.id, user.id), eq(users.passwordHash, user.passwordHash)));
+  }
+  return user;
 }
 
 /** Everyone the lead manages, with their latest invitation and whether its e-mail went out. */
@@ -42,6 +50,7 @@ export async function listPeople() {
       phone: users.phone,
       role: users.role,
       active: sql<boolean>`${users.passwordHash} is not null`,
+      deactivated: sql<boolean>`${users.deactivatedAt} is not null`,
       createdAt: users.createdAt,
       invitedAt: sql<Date | null>`(select max(i.created_at) from ${invitations} i where i.user_id = "users"."id")`,
       inviteStatus: sql<string | null>`(select n.status from ${notices} n where n.recipient_id = "users"."id" and n.kind = 'invitation' order by n.created_at desc limit 1)`,

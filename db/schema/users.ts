@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { pgTable, text, timestamp, uniqueIndex, uuid, primaryKey, boolean } from "drizzle-orm/pg-core";
+import { pgTable, text, timestamp, uniqueIndex, uuid, primaryKey, boolean, integer } from "drizzle-orm/pg-core";
 import { roleEnum } from "./enums";
 
 export const users = pgTable(
@@ -15,6 +15,13 @@ export const users = pgTable(
     unitSystem: text("unit_system", { enum: ["metric", "imperial"] }).notNull().default("metric"),
     /** Secret in the person's calendar-feed address; replaced to revoke a shared feed. */
     calendarToken: text("calendar_token").unique(),
+    /**
+     * Every session token carries the version it was issued under; raising it (sign-out) ends every
+     * session the person has, on every app instance.
+     */
+    sessionVersion: integer("session_version").notNull().default(1),
+    /** Set by the lead: the person can no longer sign in, and open sessions stop working. */
+    deactivatedAt: timestamp("deactivated_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex("users_email_lower_idx").on(sql`lower(${t.email})`)],

@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import { generateNKeysBetween } from "fractional-indexing";
-import bcrypt from "bcryptjs";
+import { hashPassword } from "../../lib/auth/passwords";
 import type { Db } from "../index";
 import { company, projectCrew, projects, stageEvents, stockingBatches, users, waterTests } from "../schema";
 import { STAGES, type Stage } from "../../lib/stages/stages";
@@ -26,7 +26,7 @@ export async function seedDemo(db: Db, now = new Date()): Promise<boolean> {
     if (count > 0) return false;
 
     await tx.insert(company).values({ id: 1, ...DEMO_COMPANY }).onConflictDoNothing();
-    const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 10);
+    const passwordHash = await hashPassword(DEMO_PASSWORD);
     const people = await tx
       .insert(users)
       // Accounts predate every demo project (the oldest goes back about 250 days).

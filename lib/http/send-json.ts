@@ -12,12 +12,12 @@ export async function sendJson<T = unknown>(url: string, method: string, body?: 
   } catch {
     return { ok: false, status: 0, error: "No connection. Check the network and try again; nothing was saved." };
   }
-  let data: any = null;
+  let data: ({ error?: string; fields?: Record<string, string> } & Record<string, unknown>) | null = null;
   try {
     data = await res.json();
   } catch {
     data = null;
   }
   if (res.ok) return { ok: true, status: res.status, data: data as T };
-  return { ok: false, status: res.status, error: data?.error ?? `The server answered ${res.status}. Try again.`, fields: data?.fields, data };
+  return { ok: false, status: res.status, error: data?.error ?? `The server answered ${res.status}. Try again.`, fields: data?.fields, data: data ?? undefined };
 }

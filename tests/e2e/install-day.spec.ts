@@ -46,7 +46,7 @@ test("crew tick the day's checklist on a phone, attach a photo, and keep ticks t
   await expect(scape).toContainText("Photo attached: finished scape.png");
   await scape.getByRole("button", { name: /Mark done/ }).click();
   await expect(scape.getByTestId("item-status")).toContainText("Saved");
-  await expect(scape.getByRole("img", { name: /Photo for/ })).toBeVisible();
+  await expect(scape.getByRole("img", { name: /Taken for/ })).toBeVisible();
   await expect(page.getByTestId("progress-aquascape")).toContainText("1 of");
 
   // The connection drops: the tick stays on the phone, marked as not saved.

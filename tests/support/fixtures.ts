@@ -1,6 +1,6 @@
 /** Test data written straight to the test database: each test makes its own people and projects. */
 import { randomUUID } from "node:crypto";
-import bcrypt from "bcryptjs";
+import { hashPassword } from "@/lib/auth/passwords";
 import { generateKeyBetween } from "fractional-indexing";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db";
@@ -12,7 +12,8 @@ export const PASSWORD = "fixture-password-1";
 let hash: string | null = null;
 
 export async function makeUser(role: Role, name = `${role} ${randomUUID().slice(0, 6)}`) {
-  hash ??= await bcrypt.hash(PASSWORD, 4);
+  // A cheap scrypt cost keeps the many test sign-ins quick; the stored cost is what gets checked.
+  hash ??= await hashPassword(PASSWORD, { log2N: 10, r: 8, p: 1 });
   const email = `${role}-${randomUUID().slice(0, 8)}@fixture.test`;
   const [user] = await db().insert(users).values({ name, email, role, passwordHash: hash }).returning();
   return user;

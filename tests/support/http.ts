@@ -5,6 +5,19 @@ export const TEST_APP_URL = process.env.TEST_APP_URL ?? "http://127.0.0.1:3100";
 
 export class Session {
   private cookies = new Map<string, string>();
+  /** Sent as X-Forwarded-For, so a test can act as a caller at its own address. */
+  constructor(private readonly address?: string) {}
+
+  private extraHeaders(): Record<string, string> {
+    return this.address ? { "x-forwarded-for": this.address } : {};
+  }
+
+  /** A second client holding this one's cookies as they are now (an old copy of the session). */
+  copy(): Session {
+    const other = new Session(this.address);
+    for (const [k, v] of this.cookies) other.cookies.set(k, v);
+    return other;
+  }
 
   /** The cookies as a Cookie header, for a request built by hand (a streamed body). */
   cookieString() {
@@ -23,22 +36,51 @@ export class Session {
     }
   }
 
-  async signIn(email: string, password = PASSWORD): Promise<number> {
-    const csrfRes = await fetch(`${TEST_APP_URL}/api/auth/csrf`, { headers: { cookie: this.cookieHeader() } });
+  private async csrfToken(): Promise<string> {
+    const csrfRes = await fetch(`${TEST_APP_URL}/api/auth/csrf`, { headers: { cookie: this.cookieHeader(), ...this.extraHeaders() } });
     this.keep(csrfRes);
-    const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
+    return ((await csrfRes.json()) as { csrfToken: string }).csrfToken;
+  }
+
+  /** The real sign-in flow (CSRF token, then the credentials callback); the whole answer. */
+  async signInResponse(email: string, password = PASSWORD) {
+    const csrfToken = await this.csrfToken();
     const res = await fetch(`${TEST_APP_URL}/api/auth/callback/credentials`, {
       method: "POST",
       redirect: "manual",
-      headers: { "content-type": "application/x-www-form-urlencoded", cookie: this.cookieHeader() },
+      headers: { "content-type": "application/x-www-form-urlencoded", cookie: this.cookieHeader(), ...this.extraHeaders() },
       body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
+    });
+    this.keep(res);
+    const text = await res.text();
+    let json: any = null;
+    try {
+      json = JSON.parse(text);
+    } catch {
+      json = null;
+    }
+    return { status: res.status, headers: res.headers, json };
+  }
+
+  async signIn(email: string, password = PASSWORD): Promise<number> {
+    return (await this.signInResponse(email, password)).status;
+  }
+
+  /** Signs out the way the sign-out button does (next-auth's sign-out with its CSRF token). */
+  async signOut(): Promise<number> {
+    const csrfToken = await this.csrfToken();
+    const res = await fetch(`${TEST_APP_URL}/api/auth/signout`, {
+      method: "POST",
+      redirect: "manual",
+      headers: { "content-type": "application/x-www-form-urlencoded", cookie: this.cookieHeader(), ...this.extraHeaders() },
+      body: new URLSearchParams({ csrfToken, json: "true" }),
     });
     this.keep(res);
     return res.status;
   }
 
   async request(method: string, path: string, body?: unknown, init: RequestInit = {}) {
-    const headers: Record<string, string> = { cookie: this.cookieHeader(), ...(init.headers as Record<string, string>) };
+    const headers: Record<string, string> = { cookie: this.cookieHeader(), ...this.extraHeaders(), ...(init.headers as Record<string, string>) };
     let payload: BodyInit | undefined;
     if (body instanceof FormData || typeof body === "string") payload = body as BodyInit;
     else if (body !== undefined) {

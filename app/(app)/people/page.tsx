@@ -4,6 +4,7 @@ import { listPeople } from "@/db/queries/users";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { InviteForm } from "./_components/invite-form";
 import { ResendButton } from "./_components/resend-button";
+import { PersonAccess } from "./_components/person-access";
 
 export const metadata: Metadata = { title: "People" };
 
@@ -14,7 +15,7 @@ const INVITE_STATUS: Record<string, { text: string; cls: string }> = {
 };
 
 export default async function PeoplePage() {
-  await requirePageUser("lead");
+  const me = await requirePageUser("lead");
   const people = await listPeople();
   return (
     <div className="mx-auto flex max-w-4xl flex-col gap-6">
@@ -28,6 +29,7 @@ export default async function PeoplePage() {
               <th className="px-4 py-2">Role</th>
               <th className="px-4 py-2">Contact</th>
               <th className="px-4 py-2">Account</th>
+              <th className="px-4 py-2">Access</th>
             </tr>
           </thead>
           <tbody>
@@ -42,13 +44,22 @@ export default async function PeoplePage() {
                     {p.phone && <span className="block">{p.phone}</span>}
                   </td>
                   <td className="px-4 py-2">
-                    {p.active ? (
+                    {p.deactivated ? (
+                      <span className="text-danger">Deactivated</span>
+                    ) : p.active ? (
                       <span className="text-ok">Active</span>
                     ) : (
                       <span className="flex flex-col gap-1">
                         {st && <span className={st.cls}>{st.text}{p.inviteStatus === "failed" && p.inviteError ? `: ${p.inviteError}` : ""}</span>}
                         <ResendButton userId={p.id} />
                       </span>
+                    )}
+                  </td>
+                  <td className="px-4 py-2">
+                    {p.id === me.id ? (
+                      <span className="text-xs text-muted">You</span>
+                    ) : (
+                      <PersonAccess userId={p.id} name={p.name} role={p.role} deactivated={p.deactivated} />
                     )}
                   </td>
                 </tr>

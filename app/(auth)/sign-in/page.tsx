@@ -3,6 +3,7 @@ import { redirect } from "next/navigation";
 import { getSessionUser } from "@/server/session";
 import { ROLE_HOME } from "@/lib/auth/roles";
 import { SignInForm } from "./sign-in-form";
+import { WRONG_CREDENTIALS, messageForCode } from "./sign-in-messages";
 
 export const metadata: Metadata = { title: "Sign in" };
 
@@ -14,7 +15,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
     <>
       <h1 className="mb-1 text-xl font-bold">Sign in</h1>
       <p className="mb-5 text-sm text-muted">Use the e-mail address your installer has for you.</p>
-      <SignInForm initialError={error ? "That e-mail and password don't match an account. Check both and try again." : undefined} />
+      <SignInForm initialError={error ? (messageForCode(error) ?? WRONG_CREDENTIALS) : undefined} />
     </>
   );
 }

@@ -4,6 +4,7 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { signIn } from "next-auth/react";
 import { signInSchema, type SignInInput } from "./sign-in.schema";
+import { WRONG_CREDENTIALS, messageForCode } from "./sign-in-messages";
 import { Field } from "@/components/ui/field";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
 
@@ -18,7 +19,7 @@ export function SignInForm({ initialError }: { initialError?: string }) {
       setError(
         result?.status && result.status >= 500
           ? "Signing in isn't working right now. Try again in a minute."
-          : "That e-mail and password don't match an account. Check both and try again.",
+          : (messageForCode(result?.error) ?? WRONG_CREDENTIALS),
       );
       return;
     }

@@ -43,6 +43,7 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
   // Ticks left on this phone from an earlier visit show as pending until they are sent.
   useEffect(() => {
     if (!queue.length) return;
+    // eslint-disable-next-line react-hooks/set-state-in-effect -- the queue comes from localStorage after mount
     setStates((s) => {
       const next = { ...s };
       for (const q of queue) {

@@ -77,7 +77,7 @@ export function ChecklistItemRow({ projectId, item, state, refusal, isLead, onSu
           {state?.attachmentId && (
             <a href={`/api/attachments/${state.attachmentId}?variant=full`} target="_blank" rel="noreferrer" className="w-fit">
               {/* eslint-disable-next-line @next/next/no-img-element */}
-              <img src={`/api/attachments/${state.attachmentId}?variant=thumb`} alt={`Photo for: ${item.label}`} className="h-20 rounded-lg border border-line object-cover" />
+              <img src={`/api/attachments/${state.attachmentId}?variant=thumb`} alt={`Taken for: ${item.label}`} className="h-20 rounded-lg border border-line object-cover" />
             </a>
           )}
         </div>

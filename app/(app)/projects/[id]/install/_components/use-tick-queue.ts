@@ -19,7 +19,10 @@ export function useTickQueue(projectId: string, handlers: { onSaved: (t: SavedTi
   const attempt = useRef(0);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const handlersRef = useRef(handlers);
-  handlersRef.current = handlers;
+  // The latest handlers, for callbacks that outlive a render.
+  useEffect(() => {
+    handlersRef.current = handlers;
+  });
 
   const store = useCallback(
     (next: QueuedTick[]) => {
@@ -71,6 +74,7 @@ export function useTickQueue(projectId: string, handlers: { onSaved: (t: SavedTi
   useEffect(() => {
     const saved = parseQueue(localStorage.getItem(storageKey));
     queueRef.current = saved;
+    // eslint-disable-next-line react-hooks/set-state-in-effect -- the saved queue lives in localStorage, readable only after mount
     setQueue(saved);
     if (saved.length) void flush();
     const online = () => {

@@ -18,7 +18,9 @@ export function useUnitsForm<V extends FieldValues, S>(opts: {
 }) {
   const { schema, stored, system, toForm, fromForm } = opts;
   const storedRef = useRef(stored);
-  storedRef.current = stored;
+  useEffect(() => {
+    storedRef.current = stored;
+  });
   const resolver = useMemo<Resolver<V>>(
     () => async (values, ctx, options) => zodResolver(schema)(fromForm(values, system, storedRef.current) as never, ctx, options as never) as never,
     [schema, fromForm, system],
