@@ -41,17 +41,15 @@ export function FloorCodeForm({ current }: { current: FloorCode }) {
         {FLOOR_CODES.map((code) => {
           const v = FLOOR_CODE_VALUES[code];
           return (
-            <label key={code} className="flex cursor-pointer gap-3 rounded-lg border border-line p-3 has-[:checked]:border-ink">
-              <input type="radio" name="floorCode" value={code} checked={choice === code} onChange={() => setChoice(code)} className="mt-1" />
-              <span className="flex flex-col gap-1 text-sm">
-                <span className="font-semibold">{v.name}</span>
-                <span>
-                  Living areas {v.liveLoadPrinted.living}, sleeping rooms {v.liveLoadPrinted.sleeping}
-                  {v.concentratedKN !== null && `, concentrated ${v.concentratedKN.toFixed(1)} kN`} <span className="text-muted">({v.liveLoadSource})</span>
-                </span>
-                <span>
-                  Ground under a slab: {v.lowestBearingPrinted} <span className="text-muted">({v.bearingSource})</span>
-                </span>
+            <label key={code} className="grid cursor-pointer grid-cols-[auto_1fr] gap-x-3 gap-y-1 rounded-lg border border-line p-3 text-sm has-[:checked]:border-ink">
+              <input type="radio" name="floorCode" value={code} checked={choice === code} onChange={() => setChoice(code)} className="row-span-3 mt-1" />
+              <span className="font-semibold">{v.name}</span>
+              <span>
+                Living areas {v.liveLoadPrinted.living}, sleeping rooms {v.liveLoadPrinted.sleeping}
+                {v.concentratedKN !== null && `, concentrated ${v.concentratedKN.toFixed(1)} kN`} <span className="text-muted">({v.liveLoadSource})</span>
+              </span>
+              <span>
+                Ground under a slab: {v.lowestBearingPrinted} <span className="text-muted">({v.bearingSource})</span>
               </span>
             </label>
           );
