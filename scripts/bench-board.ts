@@ -3,7 +3,7 @@
  * against the constant GET /api/ping, then counts the SQL queries one board read runs. Figures are
  * printed, not enforced. Started by scripts/bench.sh, which sets BENCH_URL and DATABASE_URL.
  */
-import { BASE, DURATION, measure, signIn } from "./lib/bench-http";
+import { BASE, DURATION, LEAD, measure, signIn } from "./lib/bench-http";
 import { eq } from "drizzle-orm";
 import { closeDb, db, pool } from "../db";
 import { users } from "../db/schema";

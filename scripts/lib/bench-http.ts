@@ -6,7 +6,7 @@ import autocannon from "autocannon";
 
 export const BASE = process.env.BENCH_URL ?? "http://127.0.0.1:3199";
 export const DURATION = Number(process.env.BENCH_SECONDS ?? 10);
-const LEAD = { email: "bench-lead@bench.test", password: "bench-password-1" };
+export const LEAD = { email: "bench-lead@bench.test", password: "bench-password-1" };
 
 /** The real sign-in flow: CSRF token, then the credentials callback; returns the cookie header. */
 export async function signIn(): Promise<string> {
