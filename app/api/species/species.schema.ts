@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text, optionalText } from "@/lib/validation/text";
 import { optionalNumber, requiredNumber } from "@/lib/validation/number";
 import { DIETS, SWIM_LEVELS, TEMPERAMENTS, WATER_KINDS } from "@/lib/stocking/species";
 
@@ -8,7 +9,7 @@ const flag = z.preprocess((v) => v === true || v === "true" || v === "on", z.boo
 /** A catalogue entry as the lead edits it; temperatures °C, lengths mm. */
 export const speciesSchema = z
   .object({
-    commonName: z.string({ message: "Enter the common name." }).trim().min(2, "Enter the common name.").max(80, "Keep it under 80 characters."),
+    commonName: text(80, "Keep it under 80 characters.", "Enter the common name.").min(2, "Enter the common name."),
     scientificName: z.string({ message: "Enter the scientific name." }).trim().regex(/^[A-Z][a-z]+ [a-z.-]+( [a-z.-]+)?$/, "Write it as genus and species, e.g. Genus species."),
     water: z.enum(WATER_KINDS, { message: "Choose fresh, brackish or salt water." }),
     tempMinC: requiredNumber("Enter the lowest temperature.").pipe(z.number().min(0, "Below 0 °C isn't believable.").max(40, "Above 40 °C isn't believable.")),
@@ -24,8 +25,8 @@ export const speciesSchema = z
     invertSafe: yesNo("Say whether it is safe with invertebrates."),
     diet: z.enum(DIETS, { message: "Choose a diet." }),
     minTankLengthMm: optionalNumber("Minimum tank length must be a number of mm.").pipe(z.number().int("Whole millimetres.").min(100, "At least 100 mm.").max(10_000, "Over 10 m: check the units.").nullable()),
-    notes: z.string().trim().max(1000, "Keep notes under 1,000 characters.").optional().nullable().transform((v) => (v ? v : null)),
-    source: z.string({ message: "Say where the values come from." }).trim().min(3, "Say where the values come from: \"from memory\" or the handbook's name.").max(200, "Keep it under 200 characters."),
+    notes: optionalText(1000, "Keep notes under 1,000 characters."),
+    source: text(200, "Keep it under 200 characters.", "Say where the values come from.").min(3, "Say where the values come from: \"from memory\" or the handbook's name."),
   })
   .superRefine((v, ctx) => {
     if (v.tempMinC > v.tempMaxC) ctx.addIssue({ code: "custom", path: ["tempMaxC"], message: "The highest temperature is below the lowest." });

@@ -16,5 +16,5 @@ export const visitSchema = z.object({
 export type VisitInput = z.input<typeof visitSchema>;
 
 export const cancelVisitSchema = z.object({
-  reason: z.string({ message: "Say why the visit is cancelled." }).trim().min(3, "Say in a few words why the visit is cancelled.").max(500, "Keep the reason under 500 characters."),
+  reason: text(500, "Keep the reason under 500 characters.", "Say why the visit is cancelled.").min(3, "Say in a few words why the visit is cancelled."),
 });

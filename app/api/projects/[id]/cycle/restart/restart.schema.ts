@@ -1,5 +1,6 @@
 import { z } from "zod";
+import { text } from "@/lib/validation/text";
 
 export const restartCycleSchema = z.object({
-  reason: z.string({ message: "Say why the cycle starts again." }).trim().min(5, "Say in a few words why the cycle starts again.").max(500, "Keep the reason under 500 characters."),
+  reason: text(500, "Keep the reason under 500 characters.", "Say why the cycle starts again.").min(5, "Say in a few words why the cycle starts again."),
 });

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { reasonSchema } from "@/lib/validation/text";
+import { reasonSchema, text } from "@/lib/validation/text";
 import { optionalText } from "@/lib/validation/text";
 import { pastDateTime } from "@/lib/validation/fish";
 
@@ -11,7 +11,7 @@ export const startQuarantineSchema = z.object({
 export const quarantineNoteSchema = z.object({
   kind: z.enum(["observation", "treatment"], { message: "Choose observation or treatment." }),
   at: pastDateTime("Enter when this was seen or given.").optional(),
-  text: z.string({ message: "Say what you saw or gave." }).trim().min(3, "Say what you saw or gave.").max(1000, "Keep it under 1,000 characters."),
+  text: text(1000, "Keep it under 1,000 characters.", "Say what you saw or gave.").min(3, "Say what you saw or gave."),
 });
 
 export const quarantineOverrideSchema = z.object({ reason: reasonSchema });
