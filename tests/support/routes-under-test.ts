@@ -119,7 +119,7 @@ export const SAMPLE_BODIES: Record<string, unknown> = {
   "PATCH /api/people/[id]": { active: false },
   "POST /api/projects/[id]/cycle/restart": { reason: "The filter media was washed in tap water" },
   "POST /api/projects/[id]/livestock/events": { groupId: randomUUID(), kind: "behaviour", note: "Chasing at feeding time" },
-  "POST /api/projects/[id]/stocking-plan/batches/[batchId]/display": {},
+  "POST /api/projects/[id]/stocking-plan/batches/[batchId]/display": { reTestOverride: "Re-tested on site before adding" },
   "POST /api/projects/[id]/stocking-plan/batches/[batchId]/override": { reason: "Bought from our own holding system" },
   "POST /api/projects/[id]/stocking-plan/batches/[batchId]/quarantine-notes": { kind: "observation", text: "All eating well" },
   "POST /api/projects/[id]/stocking-plan/batches/[batchId]/quarantine": { holdingTankId: randomUUID() },
