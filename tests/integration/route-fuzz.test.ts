@@ -13,7 +13,9 @@ const MB = 1024 * 1024;
 const BAD_TEXT: unknown[] = ["\u0000", "before\u0000after", "lone \ud800 high", "lone \udfff low", "x".repeat(MB), "y".repeat(60_000)];
 const NOT_A_STRING: unknown[] = [1e308, true, [], {}, { $gt: "" }];
 const NOT_A_NUMBER: unknown[] = ["twelve", "1e999", true, [], {}, "\u0000"];
-const NOT_A_BOOLEAN: unknown[] = ["true", 1, [], {}, "\u0000"];
+// A form's select posts "true" or "false", which some schemas read as the booleans they spell;
+// anything else that isn't a boolean must be refused.
+const NOT_A_BOOLEAN: unknown[] = ["yes", 1, 0, [], {}, "\u0000"];
 /** Dates nobody means, in a date field. */
 const BAD_DATES: unknown[] = ["0001-01-01T00:00:00Z", "+275760-09-13T00:00:00.000Z", "9999-12-31", "1970-01-01T00:00:00Z", true, 0, "1"];
 /** Numbers at the edges: refused or, where a field has no upper bound, harmless; never a 5xx. */

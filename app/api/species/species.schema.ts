@@ -4,7 +4,8 @@ import { optionalNumber, requiredNumber } from "@/lib/validation/number";
 import { DIETS, SWIM_LEVELS, TEMPERAMENTS, WATER_KINDS } from "@/lib/stocking/species";
 
 const yesNo = (message: string) => z.preprocess((v) => (v === "" || v === undefined ? null : v === "true" ? true : v === "false" ? false : v), z.boolean({ message }).nullable());
-const flag = z.preprocess((v) => v === true || v === "true" || v === "on", z.boolean());
+// A checkbox: a form posts "on" or "true" when ticked and nothing when not; any other value is refused.
+const flag = z.preprocess((v) => (v === "on" || v === "true" ? true : v === undefined || v === "false" ? false : v), z.boolean({ message: "Tick it or leave it empty." }));
 
 /** A catalogue entry as the lead edits it; temperatures °C, lengths mm. */
 export const speciesSchema = z
