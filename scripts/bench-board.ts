@@ -3,59 +3,15 @@
  * against the constant GET /api/ping, then counts the SQL queries one board read runs. Figures are
  * printed, not enforced. Started by scripts/bench.sh, which sets BENCH_URL and DATABASE_URL.
  */
-import autocannon from "autocannon";
+import { BASE, DURATION, LEAD, measure, signIn } from "./lib/bench-http";
 import { eq } from "drizzle-orm";
 import { closeDb, db, pool } from "../db";
 import { users } from "../db/schema";
 import { getBoard } from "../db/queries/board";
 
-const BASE = process.env.BENCH_URL ?? "http://127.0.0.1:3199";
-const LEAD = { email: "bench-lead@bench.test", password: "bench-password-1" };
-const DURATION = Number(process.env.BENCH_SECONDS ?? 10);
 // One connection measures a request's own latency; several show throughput with requests queued.
 const CONNECTION_SETS = (process.env.BENCH_CONNECTIONS ?? "1,4").split(",").map(Number);
 const CONNECTIONS = Math.max(...CONNECTION_SETS);
-
-/** The real sign-in flow: CSRF token, then the credentials callback; returns the cookie header. */
-async function signIn(): Promise<string> {
-  const jar = new Map<string, string>();
-  const keep = (res: Response) => {
-    for (const line of res.headers.getSetCookie()) {
-      const [pair] = line.split(";");
-      const i = pair.indexOf("=");
-      jar.set(pair.slice(0, i), pair.slice(i + 1));
-    }
-  };
-  const header = () => [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
-  const csrf = await fetch(`${BASE}/api/auth/csrf`);
-  keep(csrf);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const res = await fetch(`${BASE}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie: header() },
-    body: new URLSearchParams({ csrfToken, email: LEAD.email, password: LEAD.password, json: "true" }),
-  });
-  keep(res);
-  if (![...jar.keys()].some((k) => k.includes("session-token"))) throw new Error(`Sign-in failed (${res.status}).`);
-  return header();
-}
-
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
-
-async function measure(path: string, cookie: string, connections: number) {
-  const times: number[] = [];
-  let bad = 0;
-  const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const instance = autocannon({ url: `${BASE}${path}`, connections, duration: DURATION, headers: { cookie } }, (err, res) => (err ? reject(err) : resolve(res)));
-    instance.on("response", (_client: unknown, status: number, _bytes: number, ms: number) => {
-      if (status !== 200) bad++;
-      times.push(ms);
-    });
-  });
-  times.sort((a, b) => a - b);
-  return { path, p50: percentile(times, 50), p95: percentile(times, 95), rps: result.requests.average, total: times.length, bad, bytes: result.throughput.average };
-}
 
 const cookie = await signIn();
 const check = await fetch(`${BASE}/api/projects`, { headers: { cookie } });

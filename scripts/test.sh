@@ -52,7 +52,7 @@ fi
 if [ "$want_unit" = 1 ] && [ -z "${SKIP_LINT:-}" ]; then
   echo "== lint"
   # Errors fail the run; warnings are printed. The cache keeps a re-run to the files that changed.
-  node node_modules/eslint/bin/eslint.js --cache --cache-location .data/eslint-cache --max-warnings=-1 .
+  node node_modules/eslint/bin/eslint.js --cache --cache-location .data/eslint-cache --quiet .
 fi
 
 if [ "$want_unit" = 1 ]; then

@@ -86,7 +86,7 @@ export function BoardCard({ card, now, error, saving, onMoveTo }: { card: Card; 
       )}
       <ul className="text-xs" data-testid="card-lines">
         {lines.map((l) => (
-          <li key={l.key} className={LINE_TONE[l.tone]}>
+          <li key={l.key} className={LINE_TONE[l.tone]} data-testid={`card-line-${l.key}`}>
             {l.text}
           </li>
         ))}
@@ -98,11 +98,6 @@ export function BoardCard({ card, now, error, saving, onMoveTo }: { card: Card; 
           data-testid="next-needs"
         >
           {card.nextNeeds.length ? `Before ${STAGE_LABELS[next]}: ${card.nextNeeds[0]}${card.nextNeeds.length > 1 ? ` (+${card.nextNeeds.length - 1} more)` : ""}` : `Ready for ${STAGE_LABELS[next]}`}
-        </p>
-      )}
-      {card.quarantineDaysLeft != null && (
-        <p className="mt-1 text-xs text-muted" data-testid="quarantine-days">
-          {card.quarantineDaysLeft > 0 ? `Fish in quarantine: ${card.quarantineDaysLeft} ${card.quarantineDaysLeft === 1 ? "day" : "days"} left` : "Fish ready to leave quarantine"}
         </p>
       )}
       {error && (

@@ -8,7 +8,7 @@ import { companyName } from "@/db/queries/outbox";
 import { db } from "@/db";
 import { formatMoney } from "@/lib/money/amounts";
 import { INVOICE_KIND_LABELS } from "@/lib/money/schedule";
-import { PrintButton } from "@/components/money/print-button";
+import { PrintButton } from "@/components/ui/print-button";
 import { ROUNDING_NOTE } from "@/components/money/quote-table";
 
 export const metadata: Metadata = { title: "Invoice" };

@@ -5,7 +5,7 @@ import { requirePageProject } from "@/server/page-project";
 import { getQuoteForPrint } from "@/db/queries/quotes";
 import { QuoteTable, ROUNDING_NOTE } from "@/components/money/quote-table";
 import { canOnProject } from "@/lib/auth/permissions";
-import { PrintButton } from "@/components/money/print-button";
+import { PrintButton } from "@/components/ui/print-button";
 
 export const metadata: Metadata = { title: "Quote" };
 export const dynamic = "force-dynamic";

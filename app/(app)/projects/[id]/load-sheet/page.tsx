@@ -14,7 +14,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { buttonStyles } from "@/components/ui/button-styles";
 import { LoadResults } from "../survey/_components/load-results";
 import { DesignInputs, SurveyInputs } from "./design-inputs";
-import { PrintButton } from "./print-button";
+import { PrintButton } from "@/components/ui/print-button";
 
 export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Load-check sheet");
 

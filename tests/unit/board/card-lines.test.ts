@@ -1,0 +1,22 @@
+import { describe, expect, it } from "vitest";
+import { cardStatusLines } from "@/components/board/card-lines";
+
+const now = new Date("2026-11-30T12:00:00Z");
+const base = { stageEnteredAt: "2026-11-29T09:00:00Z", lateBy: 0, quarantineDaysLeft: null };
+
+describe("a card's status lines", () => {
+  it("a card on time says only when it arrived", () => {
+    expect(cardStatusLines(base, now)).toEqual([{ key: "since", text: "here since yesterday", tone: "quiet" }]);
+  });
+
+  it("a card late for its own stage says by how much, as a caution", () => {
+    expect(cardStatusLines({ ...base, lateBy: 1 }, now)[0]).toEqual({ key: "since", text: "here since yesterday · 1 day over this stage's usual time", tone: "caution" });
+    expect(cardStatusLines({ ...base, lateBy: 3 }, now)[0].text).toBe("here since yesterday · 3 days over this stage's usual time");
+  });
+
+  it("fish in quarantine show the days left, and a finished quarantine says the fish are ready", () => {
+    expect(cardStatusLines({ ...base, quarantineDaysLeft: 5 }, now)[1]).toEqual({ key: "quarantine", text: "Fish in quarantine: 5 days left", tone: "quiet" });
+    expect(cardStatusLines({ ...base, quarantineDaysLeft: 1 }, now)[1].text).toBe("Fish in quarantine: 1 day left");
+    expect(cardStatusLines({ ...base, quarantineDaysLeft: 0 }, now)[1]).toEqual({ key: "quarantine", text: "Fish ready to leave quarantine", tone: "ok" });
+  });
+});
