@@ -58,8 +58,9 @@ type Row = {
 
 /**
  * The board as the caller may see it, in column order. A fixed number of queries however many
- * cards, run side by side: the cards with their people, the gate records of all of them, and the
- * cycle inputs (rules, starts, readings, doses) of the cards in cycling.
+ * cards, run side by side: the cards with their people, the gate records of all of them, the
+ * cycle inputs (rules, starts, readings, doses) of the cards in cycling, and the company's expected
+ * stage durations.
  */
 export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new Date()): Promise<BoardData> {
   const visible = visibleProjectsWhere(user);

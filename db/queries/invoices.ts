@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, desc, eq, inArray, ne, sql } from "drizzle-orm";
 import { db, type Db, type Tx } from "../index";
 import { invoiceCounters, invoices, paymentSchedules, payments, projects, quoteAcceptances, quotes, users } from "../schema";
-import { getMoneySettings, getSchedule } from "./money-settings";
+import { getMoneySettings, ensureSchedule } from "./money-settings";
 import { companyName, enqueueNotice } from "./outbox";
 import { splitSchedule, instalmentAmount, INVOICE_KIND_LABELS, instalmentsDueOnMove, type Instalment, type InvoiceKind } from "../../lib/money/schedule";
 import { splitByWeights } from "../../lib/money/amounts";
@@ -80,7 +80,7 @@ export async function issueInstalment(tx: Tx, opts: { projectId: string; kind: I
     .from(invoices)
     .where(and(eq(invoices.projectId, opts.projectId), ne(invoices.kind, "monthly")));
   if (billed.some((b) => b.kind === opts.kind)) return null;
-  const schedule = await getSchedule(opts.projectId, tx);
+  const schedule = await ensureSchedule(opts.projectId, tx);
   const shares = { depositBp: schedule.depositBp, progressBp: schedule.progressBp };
   const billedTotal = billed.reduce((s, b) => s + b.totalMinor, 0);
   const billedTax = billed.reduce((s, b) => s + b.taxMinor, 0);

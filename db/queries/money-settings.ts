@@ -32,18 +32,32 @@ export async function saveMoneySettings(input: Omit<MoneySettings, "companyId" |
   });
 }
 
-/** A project's schedule, copied from the company default the first time it is needed. */
-export async function getSchedule(projectId: string, conn: Conn = db()) {
+type Schedule = typeof paymentSchedules.$inferSelect;
+
+/**
+ * A project's schedule: its own once saved or used for an invoice, else the company default as it
+ * stands today (`updatedAt` null). Reading never writes, so looking at a project changes nothing.
+ */
+export async function getSchedule(projectId: string, conn: Conn = db()): Promise<Omit<Schedule, "updatedAt"> & { updatedAt: Date | null }> {
   const [row] = await conn.select().from(paymentSchedules).where(eq(paymentSchedules.projectId, projectId));
   if (row) return row;
   const s = await getMoneySettings(conn);
+  return { projectId, depositBp: s.depositBp, progressBp: s.progressBp, monthlyPlanMinor: null, monthlyPlanTaxBp: s.defaultTaxBp, updatedAt: null };
+}
+
+/**
+ * The project's own schedule, copied from the company default the first time one is needed for a
+ * write (an invoice, an edit), so a later change of the default never alters a project already billed.
+ */
+export async function ensureSchedule(projectId: string, conn: Conn = db()): Promise<Schedule> {
+  const s = await getMoneySettings(conn);
   await conn.insert(paymentSchedules).values({ projectId, depositBp: s.depositBp, progressBp: s.progressBp, monthlyPlanTaxBp: s.defaultTaxBp }).onConflictDoNothing();
-  const [created] = await conn.select().from(paymentSchedules).where(eq(paymentSchedules.projectId, projectId));
-  return created;
+  const [row] = await conn.select().from(paymentSchedules).where(eq(paymentSchedules.projectId, projectId));
+  return row;
 }
 
 export async function saveSchedule(projectId: string, input: { depositBp: number; progressBp: number; monthlyPlanMinor: number | null; monthlyPlanTaxBp: number }) {
-  await getSchedule(projectId);
+  await ensureSchedule(projectId);
   const [row] = await db()
     .update(paymentSchedules)
     .set({ ...input, updatedAt: new Date() })

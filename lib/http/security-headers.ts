@@ -48,8 +48,11 @@ export const STATIC_SECURITY_HEADERS: { key: string; value: string }[] = [
   { key: "Permissions-Policy", value: "camera=(self), microphone=(), geolocation=(), payment=()" },
 ];
 
-/** For API answers, which are never documents: nothing may load from them, nothing may frame them. */
-export const API_CSP = "default-src 'none'; frame-ancestors 'none'";
+/**
+ * For API answers, which are never documents: nothing may load from them or frame them, and one
+ * opened directly (a stored file) runs sandboxed, so an upload can never act as one of our pages.
+ */
+export const API_CSP = "default-src 'none'; frame-ancestors 'none'; sandbox";
 
 /** The object store's origins as the browser sees presigned links. */
 export function storageOrigins(s3: { endpoint?: string; bucket: string; region: string }): string[] {

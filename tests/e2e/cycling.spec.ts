@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
 import { format } from "date-fns";
+import { eq } from "drizzle-orm";
 import { db, closeDb } from "@/db";
 import { stageEvents, waterTests } from "@/db/schema";
 import { makeTeam, PASSWORD } from "../support/fixtures";
@@ -93,4 +94,25 @@ test("the lead corrects a mistyped reading; the old one stays on record, voided 
   await expect(voided).toHaveCount(1);
   await expect(voided).toContainText("Read the nitrite card in poor light");
   await expect(page.getByTestId("reading-row").first()).toContainText("Correction");
+});
+
+test("the lead restarts a cycle on purpose, with a reason the timeline shows", async ({ page }) => {
+  test.setTimeout(90_000);
+  const t = await cyclingProject();
+  await signIn(page, t.lead.email, PASSWORD);
+  await page.goto(`/projects/${t.project.id}/water`);
+  await ready(page);
+  await page.getByRole("button", { name: "Restart the cycle…" }).click();
+  await page.getByRole("button", { name: "Restart the cycle", exact: true }).click();
+  await expect(page.getByRole("alert").filter({ hasText: /why/i })).toBeVisible();
+  await page.getByLabel("Why start the cycle again?").fill("Filter media washed in tap water");
+  await page.getByRole("button", { name: "Restart the cycle", exact: true }).click();
+  await expect(page.getByRole("button", { name: "Restart the cycle…" })).toBeVisible();
+
+  const events = await db().select().from(stageEvents).where(eq(stageEvents.projectId, t.project.id));
+  const restart = events.find((e) => e.cycleRestarted);
+  expect(restart?.reason).toBe("Filter media washed in tap water");
+  expect(restart?.byUserId).toBe(t.lead.id);
+  await page.goto(`/projects/${t.project.id}`);
+  await expect(page.getByText("Filter media washed in tap water")).toBeVisible();
 });

@@ -61,7 +61,9 @@ describe("moves at the same time", () => {
       await getBoard(t.lead);
       const many = count;
       expect(few).toBe(many);
-      expect(many).toBeLessThanOrEqual(6);
+      // The cards, their gate records, the cycling cards' inputs (rules, starts, readings, doses) and
+      // the company's stage durations: seven round trips, run side by side, however many cards.
+      expect(many).toBeLessThanOrEqual(7);
     } finally {
       p.query = original;
     }

@@ -50,6 +50,26 @@ export function urlFor(h: Handler, projectId: string): string {
 
 const NOW_ISH = "2026-01-05T10:00";
 
+const MATRIX_SPECIES = {
+  commonName: "Matrix tetra",
+  scientificName: "Matrixia testa",
+  water: "fresh",
+  tempMinC: 22,
+  tempMaxC: 27,
+  phMin: 6,
+  phMax: 7.5,
+  adultLengthMm: 35,
+  temperament: "peaceful",
+  territorial: false,
+  shoalMin: 6,
+  level: "middle",
+  coralSafe: null,
+  invertSafe: null,
+  diet: "omnivore",
+  minTankLengthMm: null,
+  source: "invented for the route tests",
+};
+
 /** A body each route's schema accepts: sent only to callers who must be refused before it is read. */
 export const SAMPLE_BODIES: Record<string, unknown> = {
   "PATCH /api/checklist-items/[id]": { label: "Check the level twice" },
@@ -95,6 +115,25 @@ export const SAMPLE_BODIES: Record<string, unknown> = {
   "POST /api/projects/[id]/water-tests/[testId]/void": { reason: "entered twice" },
   "POST /api/projects/[id]/water-tests": { takenAt: NOW_ISH, ammoniaMgL: 0 },
   "PUT /api/settings/cycle-rules": { stallDays: 10 },
+  "POST /api/holding-tanks": { name: "Matrix holding tank", volumeL: 120, location: "Back room" },
+  "PATCH /api/people/[id]": { active: false },
+  "POST /api/projects/[id]/cycle/restart": { reason: "The filter media was washed in tap water" },
+  "POST /api/projects/[id]/livestock/events": { groupId: randomUUID(), kind: "behaviour", note: "Chasing at feeding time" },
+  "POST /api/projects/[id]/stocking-plan/batches/[batchId]/display": {},
+  "POST /api/projects/[id]/stocking-plan/batches/[batchId]/override": { reason: "Bought from our own holding system" },
+  "POST /api/projects/[id]/stocking-plan/batches/[batchId]/quarantine-notes": { kind: "observation", text: "All eating well" },
+  "POST /api/projects/[id]/stocking-plan/batches/[batchId]/quarantine": { holdingTankId: randomUUID() },
+  "PUT /api/projects/[id]/stocking-plan/batches/[batchId]": { items: [{ speciesId: randomUUID(), count: 6 }] },
+  "POST /api/projects/[id]/stocking-plan/batches": { items: [{ speciesId: randomUUID(), count: 6 }] },
+  "PUT /api/projects/[id]/stocking-plan": { reef: false },
+  "PATCH /api/projects/[id]/uploads/[attachmentId]": { caption: "The stand, levelled" },
+  "POST /api/projects/[id]/uploads/[attachmentId]/void": { reason: "wrong project" },
+  "POST /api/projects/[id]/visits/[visitId]/cancel": { reason: "client away" },
+  "PATCH /api/projects/[id]/visits/[visitId]": { kind: "install day", startsAt: "2027-01-06T10:00", durationMinutes: 60 },
+  "PUT /api/settings/quarantine": { quarantineDays: 28 },
+  "PUT /api/settings/timing": { stageDurations: {} },
+  "PUT /api/species/[speciesId]": MATRIX_SPECIES,
+  "POST /api/species": MATRIX_SPECIES,
   "POST /api/invoices/[invoiceId]/transfer": { amountMinor: 1000, receivedOn: "2026-11-30", reference: "BANK-REF-1" },
   "POST /api/money/monthly": { period: "2026-11" },
   "PUT /api/money/settings": { currency: "EUR", depositBp: 3000, progressBp: 4000, defaultTaxBp: 2000, paymentTermsDays: 14 },

@@ -18,6 +18,7 @@ import { canUndoOwn, undoDeadline } from "@/lib/install/undo-window";
 import { READING_LIMITS } from "@/lib/cycling/readings";
 import { format } from "date-fns";
 import { KitChoice } from "./_components/kit-choice";
+import { RestartCycleButton } from "./_components/restart-cycle-button";
 import { getProjectKits, listTestKits } from "@/db/queries/test-kits";
 
 export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Water & cycling");
@@ -40,6 +41,7 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
   const canStock = canOnProject(relation, "record_stocking");
   const fishStage = project.stage === "first_stocking" || project.stage === "in_service";
   const canChooseKits = canOnProject(relation, "edit_details");
+  const canRestart = project.stage === "cycling" && canOnProject(relation, "override_gate");
   const [doses, volume, batches, kits, companyKits] = await Promise.all([
     canDose ? listDoses(project.id) : Promise.resolve([]),
     canDose ? getDesignVolume(project.id) : Promise.resolve(null),
@@ -94,6 +96,7 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
             {earlier} {earlier === 1 ? "reading from before this cycle began is" : "readings from before this cycle began are"} in the table below but not on the chart.
           </p>
         )}
+        {canRestart && <RestartCycleButton projectId={project.id} />}
       </section>
 
       {canChooseKits && <KitChoice projectId={project.id} chosen={kits} kits={companyKits} />}
