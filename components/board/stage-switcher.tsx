@@ -17,12 +17,15 @@ function SwitchButton({ stage, count, chosen, onChoose }: { stage: Stage; count:
         ref={setNodeRef}
         type="button"
         aria-pressed={chosen}
-        aria-label={`${STAGE_LABELS[stage]}: ${installsWords(count)}`}
         onClick={() => onChoose(stage)}
         data-testid={`switch-${stage}`}
         className={`flex w-full flex-col items-center gap-0.5 rounded-lg border px-0.5 py-1.5 ${chosen ? `border-accent ${tone.soft}` : "border-transparent"} ${isOver ? "ring-2 ring-accent" : ""}`}
       >
         <TankMark stage={stage} className={`h-5 w-7 ${tone.fill}`} />
+        {/* The name is spoken from the content, so it always contains what is shown (the count). */}
+        <span className="sr-only">
+          {STAGE_LABELS[stage]}: {installsWords(count)}
+        </span>
         <span className={`num text-xs font-semibold ${tone.text}`} aria-hidden="true">
           {count}
         </span>

@@ -3,10 +3,10 @@ import Link from "next/link";
 import { usePathname } from "next/navigation";
 import type { NavItem } from "./nav-items";
 
-export function NavLinks({ items }: { items: NavItem[] }) {
+export function NavLinks({ items, className = "" }: { items: NavItem[]; className?: string }) {
   const pathname = usePathname();
   return (
-    <nav aria-label="Main" className="flex items-center gap-1 overflow-x-auto">
+    <nav aria-label="Main" className={`items-center gap-1 ${className}`}>
       {items.map((item) => {
         const active = pathname === item.href || pathname.startsWith(item.href + "/");
         return (

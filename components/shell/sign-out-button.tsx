@@ -3,7 +3,7 @@ import { signOut } from "next-auth/react";
 
 export function SignOutButton() {
   return (
-    <button type="button" onClick={() => signOut({ callbackUrl: "/sign-in" })} className="text-sm font-medium text-muted hover:text-ink">
+    <button type="button" onClick={() => signOut({ callbackUrl: "/sign-in" })} className="whitespace-nowrap text-sm font-medium text-muted hover:text-ink">
       Sign out
     </button>
   );

@@ -43,12 +43,19 @@ export async function summarizeForClient(project: ProjectRow, now = new Date(), 
   return { project, people: { lead: people.lead, crew: people.crew }, water, photos, next };
 }
 
-/** The client's home: only their own projects. */
-export async function getClientHome(user: Pick<SessionUser, "id">, now = new Date()) {
-  const own = await db().select().from(projects).where(eq(projects.clientId, user.id)).orderBy(desc(projects.updatedAt));
+/** The client's short list: one line per project (name, stage, what happens next), light enough for many tanks. */
+export async function listClientProjects(user: Pick<SessionUser, "id">, now = new Date()) {
+  const own = await db()
+    .select({ id: projects.id, title: projects.title, stage: projects.stage, targetInstallDate: projects.targetInstallDate, targetHandoverDate: projects.targetHandoverDate })
+    .from(projects)
+    .where(eq(projects.clientId, user.id))
+    .orderBy(desc(projects.updatedAt));
   const upcoming = await nextVisits(
     own.map((p) => p.id),
     now,
   );
-  return Promise.all(own.map((project) => summarizeForClient(project, now, upcoming.get(project.id) ?? null)));
+  return own.map((p) => ({
+    ...p,
+    next: whatHappensNext({ stage: p.stage, targetInstallDate: p.targetInstallDate, targetHandoverDate: p.targetHandoverDate, nextVisit: upcoming.get(p.id) ?? null, now }),
+  }));
 }

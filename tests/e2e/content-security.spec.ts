@@ -1,28 +1,13 @@
-import { readdirSync, statSync } from "node:fs";
-import { join, relative } from "node:path";
 import { expect, test, type Page } from "@playwright/test";
 import { eq } from "drizzle-orm";
 import { db, closeDb } from "@/db";
 import { projects } from "@/db/schema";
 import { DEMO, ready, signIn } from "../pages/sign-in-page";
+import { pageRoutes } from "../support/page-routes";
 
 test.afterAll(async () => {
   await closeDb();
 });
-
-/** Every page the app has, from the files under app/: route groups dropped, [id] filled in later. */
-function pageRoutes(dir = "app"): string[] {
-  const out: string[] = [];
-  for (const name of readdirSync(dir)) {
-    const path = join(dir, name);
-    if (statSync(path).isDirectory()) out.push(...pageRoutes(path));
-    else if (name === "page.tsx") {
-      const route = "/" + relative("app", dir).split("/").filter((s) => s && !s.startsWith("(")).join("/");
-      out.push(route);
-    }
-  }
-  return out.sort();
-}
 
 async function projectId(title: string) {
   const [p] = await db().select({ id: projects.id }).from(projects).where(eq(projects.title, title));

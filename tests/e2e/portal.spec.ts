@@ -31,7 +31,14 @@ test("a client follows their cycling tank and writes to the lead, who sees it on
   await expect(page).toHaveURL(/\/portal$/);
   await ready(page);
 
-  const card = page.getByRole("article", { name: t.project.title });
+  // The portal lists each project on one line; the project's own page carries the detail.
+  const line = page.getByRole("article", { name: t.project.title });
+  await expect(line).toContainText("Cycling");
+  await expect(line).toContainText("Next: ");
+  await line.getByRole("link", { name: t.project.title }).click();
+  await expect(page).toHaveURL(new RegExp(`/projects/${t.project.id}$`));
+  await ready(page);
+  const card = page.getByRole("main");
   await expect(card.getByRole("list", { name: "Progress: Cycling, stage 5 of 7" })).toBeVisible();
   await expect(card.getByTestId("water-words")).toContainText("Ammonia is falling, nitrite is rising: the bacteria are establishing.");
   await expect(card.getByTestId("water-words")).toContainText("ammonia 0.5 mg/L, nitrite 1 mg/L, nitrate 5 mg/L");

@@ -7,7 +7,7 @@ export type ProjectTab = { href: string; label: string };
 export function ProjectTabs({ tabs }: { tabs: ProjectTab[] }) {
   const pathname = usePathname();
   return (
-    <nav aria-label="Project sections" className="no-print -mb-px flex gap-1 overflow-x-auto border-b border-line">
+    <nav aria-label="Project sections" className="no-print -mb-px flex flex-wrap gap-x-1 border-b border-line">
       {tabs.map((t) => {
         const active = pathname === t.href;
         return (

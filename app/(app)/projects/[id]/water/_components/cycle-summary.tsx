@@ -39,7 +39,7 @@ export function CycleSummary({
         </h2>
         <span
           data-testid="cycle-phase"
-          className={`rounded-full px-2.5 py-0.5 text-xs font-semibold ${ready ? "bg-ok-soft text-ok" : "bg-stage-cycling-soft text-stage-cycling"}`}
+          className={`rounded-full px-2.5 py-0.5 text-xs font-semibold ${ready ? "bg-ok-soft text-ok" : "bg-stage-cycling-soft text-stage-cycling-ink"}`}
         >
           {ready ? "✓ " : ""}
           {PHASE_LABELS[phase]}
