@@ -100,6 +100,7 @@ test("the lead restarts a cycle on purpose, with a reason the timeline shows", a
   test.setTimeout(90_000);
   const t = await cyclingProject();
   await signIn(page, t.lead.email, PASSWORD);
+  await expect(page).toHaveURL(/\/board$/);
   await page.goto(`/projects/${t.project.id}/water`);
   await ready(page);
   await page.getByRole("button", { name: "Restart the cycle…" }).click();
