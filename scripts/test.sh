@@ -51,7 +51,8 @@ fi
 
 if [ "$want_unit" = 1 ] && [ -z "${SKIP_LINT:-}" ]; then
   echo "== lint"
-  # Errors fail the run; warnings are printed. The cache keeps a re-run to the files that changed.
+  # Only errors are printed, and they fail the run (`npm run lint` shows warnings too). The cache
+  # keeps a re-run to the files that changed.
   node node_modules/eslint/bin/eslint.js --cache --cache-location .data/eslint-cache --quiet .
 fi
 
