@@ -147,3 +147,27 @@ export function equipmentCautions(kind: EquipmentKind): string[] {
       return [ELECTRIC];
   }
 }
+
+export type PieceDue = {
+  interval: ServiceInterval | null;
+  dueOn: Ymd | null;
+  dueState: DueState | null;
+  dueWords: string;
+  warrantyState: WarrantyState | null;
+  warrantyWords: string | null;
+};
+
+/** Everything a register line says about a piece's next service and its warranty, from `today`. */
+export function pieceDue(
+  piece: { kind: EquipmentKind; serviceIntervalDays: number | null; installedOn: Ymd | null; warrantyUntil: Ymd | null; lastServicedOn: Ymd | null },
+  company: CompanyIntervals,
+  today: Ymd,
+): PieceDue {
+  const interval = serviceIntervalFor(piece, company);
+  const dueOn = nextServiceDue({ lastServicedOn: piece.lastServicedOn, installedOn: piece.installedOn, intervalDays: interval?.days ?? null });
+  let words: string;
+  if (dueOn) words = dueWords(dueOn, today);
+  else if (!interval) words = "no routine service";
+  else words = "next service unknown: add the install date or record a service";
+  return { interval, dueOn, dueState: dueOn ? dueState(dueOn, today) : null, dueWords: words, warrantyState: warrantyState(piece.warrantyUntil, today), warrantyWords: warrantyWords(piece.warrantyUntil, today) };
+}

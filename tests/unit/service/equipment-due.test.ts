@@ -7,6 +7,7 @@ import {
   equipmentCautions,
   equipmentDateProblems,
   nextServiceDue,
+  pieceDue,
   serviceIntervalFor,
   warrantyState,
   warrantyWords,
@@ -112,5 +113,21 @@ describe("cautions", () => {
     expect(equipmentCautions("CO2 system")[0]).toMatch(/cylinder valve/);
     expect(equipmentCautions("dosing pump")[0]).toMatch(/gloves and eye protection/);
     expect(equipmentCautions("heater")[1]).toMatch(/cool/);
+  });
+});
+
+describe("a register line", () => {
+  const today = "2026-12-02";
+  it("says when a never-serviced piece is due from its install date", () => {
+    const d = pieceDue({ kind: "canister filter", serviceIntervalDays: null, installedOn: "2026-07-01", warrantyUntil: "2026-12-20", lastServicedOn: null }, {}, today);
+    expect(d).toEqual({ interval: { days: 120, source: "common practice" }, dueOn: "2026-10-29", dueState: "overdue", dueWords: "overdue by 34 days", warrantyState: "ending soon", warrantyWords: "warranty ending soon: 18 days left" });
+  });
+
+  it("says when there is no interval, or nothing to count from", () => {
+    expect(pieceDue({ kind: "other", serviceIntervalDays: null, installedOn: "2026-07-01", warrantyUntil: null, lastServicedOn: null }, {}, today).dueWords).toBe("no routine service");
+    const unknown = pieceDue({ kind: "heater", serviceIntervalDays: null, installedOn: null, warrantyUntil: null, lastServicedOn: null }, {}, today);
+    expect(unknown.dueWords).toBe("next service unknown: add the install date or record a service");
+    expect(unknown.dueState).toBeNull();
+    expect(unknown.warrantyWords).toBeNull();
   });
 });
