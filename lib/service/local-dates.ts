@@ -83,3 +83,8 @@ export function isKnownTimeZone(zone: string): boolean {
 export function dayLabel(day: Ymd): string {
   return new Date(toUtcMs(day)).toLocaleDateString("en-GB", { weekday: "short", day: "numeric", month: "short", timeZone: "UTC" });
 }
+
+/** "29 Oct 2026", for a calendar date on a line. */
+export function dateWords(day: Ymd): string {
+  return new Date(toUtcMs(day)).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { dueWeek, groupDueItems, itemIsFor, weekWords, type DueItem } from "@/lib/service/due-list";
-import { addDays, daysBetween, isKnownTimeZone, localDay, weekStart, zonedInstant } from "@/lib/service/local-dates";
+import { addDays, dateWords, daysBetween, isKnownTimeZone, localDay, weekStart, zonedInstant } from "@/lib/service/local-dates";
 
 const item = (over: Partial<DueItem> & Pick<DueItem, "key" | "day">): DueItem => ({
   type: "visit",
@@ -34,6 +34,10 @@ describe("days in the company's time zone", () => {
     expect(addDays("2026-03-28", 1)).toBe("2026-03-29");
     expect(daysBetween("2026-03-01", "2026-04-01")).toBe(31);
     expect(daysBetween("2028-02-01", "2028-03-01")).toBe(29);
+  });
+
+  it("read a date in words", () => {
+    expect(dateWords("2028-02-29")).toBe("29 Feb 2028");
   });
 
   it("know the zones this runtime knows", () => {

@@ -2,6 +2,7 @@ import type { PieceDue } from "@/lib/service/equipment-due";
 import { equipmentCautions } from "@/lib/service/equipment-due";
 import type { EquipmentRow } from "@/db/queries/equipment";
 import { PieceActions } from "./piece-actions";
+import { dateWords } from "@/lib/service/local-dates";
 
 export type PieceLine = {
   piece: EquipmentRow & { retiredByName: string | null };
@@ -23,7 +24,7 @@ const SOURCE_WORDS = { piece: "its own interval", company: "the company's interv
 export function PieceCard({ projectId, line, today, canEdit, internal, kindIntervals }: { projectId: string; line: PieceLine; today: string; canEdit: boolean; internal: boolean; kindIntervals: Record<string, number | null> }) {
   const { piece, due } = line;
   return (
-    <li className="flex flex-col gap-2 rounded-2xl border border-line bg-card p-4" data-testid="equipment-piece">
+    <li id={`piece-${piece.id}`} className="flex scroll-mt-20 flex-col gap-2 rounded-2xl border border-line bg-card p-4" data-testid="equipment-piece">
       <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
         <h4 className="font-semibold">{piece.kind}</h4>
         {piece.makeModel && <span className="text-sm text-muted">{piece.makeModel}</span>}
@@ -31,21 +32,21 @@ export function PieceCard({ projectId, line, today, canEdit, internal, kindInter
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="text-muted">Next service</dt>
         <dd className={due.dueState ? DUE_TONE[due.dueState] : "text-muted"}>
-          {due.dueOn ? `${due.dueOn} · ` : ""}
+          {due.dueOn ? `${dateWords(due.dueOn)} · ` : ""}
           {due.dueWords}
           {due.interval && <span className="font-normal text-muted"> (every {due.interval.days} days, {SOURCE_WORDS[due.interval.source]})</span>}
         </dd>
         <dt className="text-muted">Last serviced</dt>
-        <dd>{line.lastServicedOn ?? "not yet"}</dd>
+        <dd>{line.lastServicedOn ? dateWords(line.lastServicedOn) : "not yet"}</dd>
         {piece.installedOn && (
           <>
             <dt className="text-muted">Installed</dt>
-            <dd>{piece.installedOn}</dd>
+            <dd>{dateWords(piece.installedOn)}</dd>
           </>
         )}
         <dt className="text-muted">Warranty</dt>
         <dd className={due.warrantyState === "ending soon" || due.warrantyState === "ends today" ? "font-semibold text-caution" : ""}>
-          {piece.warrantyUntil ? `until ${piece.warrantyUntil} · ${due.warrantyWords}` : "not recorded"}
+          {piece.warrantyUntil ? `until ${dateWords(piece.warrantyUntil)} · ${due.warrantyWords}` : "not recorded"}
         </dd>
         {internal && piece.notes && (
           <>
@@ -68,7 +69,7 @@ export function PieceCard({ projectId, line, today, canEdit, internal, kindInter
         <ul className="text-xs text-muted">
           {line.services.map((s, i) => (
             <li key={i}>
-              {s.servicedOn}: {s.note ?? "serviced"} ({s.byName}
+              {dateWords(s.servicedOn)}: {s.note ?? "serviced"} ({s.byName}
               {s.visitId ? ", on a visit" : ""})
             </li>
           ))}
