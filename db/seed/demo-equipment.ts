@@ -19,9 +19,9 @@ export const seedDemoEquipment: FeatureSeed = async (tx, { now, projectIds: p, p
     .values([
       { projectId: dining, kind: "canister filter", makeModel: "Canister 1200 (house brand)", installedOn: day(110), warrantyUntil: day(-620), lastServicedAt: at(30), createdBy: u.lead, notes: "Hose clamps were stiff last time: bring spares." },
       { projectId: dining, kind: "heater", makeModel: "Glass heater 300 W (house brand)", installedOn: day(110), warrantyUntil: day(-3), lastServicedAt: at(20), createdBy: u.lead },
-      { projectId: dining, kind: "lighting", makeModel: "Reefbar LED 120 (invented)", installedOn: day(110), warrantyUntil: day(-620), createdBy: u.lead },
-      { projectId: surgery, kind: "sump return pump", makeModel: "Tidewell DC 40 (invented)", installedOn: day(200), warrantyUntil: day(-165), lastServicedAt: at(60), createdBy: u.lead },
-      { projectId: surgery, kind: "UV clarifier", makeModel: "Clearwell UV 18 W (invented)", installedOn: day(200), warrantyUntil: day(-30), lastServicedAt: at(170), createdBy: u.lead, serviceIntervalDays: 180 },
+      { projectId: dining, kind: "lighting", makeModel: "LED bar 120 cm (house brand)", installedOn: day(110), warrantyUntil: day(-620), createdBy: u.lead },
+      { projectId: surgery, kind: "sump return pump", makeModel: "Return pump DC 40 (house brand)", installedOn: day(200), warrantyUntil: day(-165), lastServicedAt: at(60), createdBy: u.lead },
+      { projectId: surgery, kind: "UV clarifier", makeModel: "UV unit 18 W (house brand)", installedOn: day(200), warrantyUntil: day(-30), lastServicedAt: at(170), createdBy: u.lead, serviceIntervalDays: 180 },
       // Last cleaned 140 days ago on the 120-day interval (common practice): 20 days overdue.
       { projectId: surgery, kind: "canister filter", makeModel: "Canister 900 (house brand)", installedOn: day(200), lastServicedAt: at(140), createdBy: u.lead },
     ])
