@@ -59,6 +59,10 @@ export const equipment = pgTable(
       .references(() => users.id),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     retiredAt: timestamp("retired_at", { withTimezone: true }),
+    /** Who retired the piece and why: it stays on record. */
+    retiredBy: uuid("retired_by").references(() => users.id),
+    retireReason: text("retire_reason"),
+    updatedAt: timestamp("updated_at", { withTimezone: true }),
   },
   (t) => [index("equipment_project_idx").on(t.projectId)],
 );

@@ -37,7 +37,9 @@ export type ProjectAction =
   | "record_quarantine"
   | "override_quarantine"
   | "view_livestock"
-  | "record_livestock";
+  | "record_livestock"
+  // The tank's equipment register and recording a service by hand (the client reads the register).
+  | "edit_equipment";
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
@@ -58,6 +60,7 @@ const CREW: ProjectAction[] = [
   "record_quarantine",
   "view_livestock",
   "record_livestock",
+  "edit_equipment",
 ];
 const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message", "see_money", "accept_and_pay", "view_livestock"];
 // The client's signature and card are theirs: nobody accepts or pays in their place.

@@ -15,6 +15,11 @@ import { DEFAULT_QUARANTINE_DAYS } from "@/lib/stocking/quarantine";
 import { TestKitsPanel } from "./_components/test-kits-panel";
 import { FloorCodeForm } from "./_components/floor-code-form";
 import { getCompanyFloorCode } from "@/db/queries/company-settings";
+import { getServiceSettings } from "@/db/queries/service-settings";
+import { effectiveKindIntervals } from "@/lib/service/equipment-due";
+import { DEFAULT_SERVICE_INTERVAL_DAYS } from "@/lib/service/equipment-kinds";
+import { TimeZoneForm } from "./_components/time-zone-form";
+import { EquipmentIntervalsForm } from "./_components/equipment-intervals-form";
 
 export const metadata: Metadata = { title: "Settings" };
 
@@ -22,6 +27,8 @@ export const metadata: Metadata = { title: "Settings" };
 export default async function SettingsPage() {
   await requirePageUser("lead");
   const [overrides, kits, floorCode, durationOverrides, companyDelay, quarantineDays] = await Promise.all([getCompanyCycleRules(), listTestKits(), getCompanyFloorCode(), getStageDurationOverrides(), getCompanyNoticeDelay(), getQuarantineDays()]);
+  const service = await getServiceSettings();
+  const zones = ["UTC", ...Intl.supportedValuesOf("timeZone").filter((z) => z !== "UTC")];
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-6">
       <div>
@@ -37,6 +44,8 @@ export default async function SettingsPage() {
       <TestKitsPanel kits={kits} />
       <FloorCodeForm current={floorCode} />
       <QuarantineForm days={quarantineDays} defaultDays={DEFAULT_QUARANTINE_DAYS} />
+      <TimeZoneForm current={service.timeZone} zones={zones} />
+      <EquipmentIntervalsForm intervals={effectiveKindIntervals(service.equipmentIntervals)} commonPractice={{ ...DEFAULT_SERVICE_INTERVAL_DAYS }} />
     </div>
   );
 }

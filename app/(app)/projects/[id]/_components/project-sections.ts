@@ -11,6 +11,7 @@ const SECTIONS: { path: string; label: string; roles: Role[] }[] = [
   { path: "/photos", label: "Photos", roles: ["lead", "crew", "client"] },
   { path: "/talk", label: "Messages & notes", roles: ["lead", "crew", "client"] },
   { path: "/visits", label: "Visits", roles: ["lead", "crew"] },
+  { path: "/equipment", label: "Equipment", roles: ["lead", "crew", "client"] },
   { path: "/money", label: "Money", roles: ["lead", "client"] },
 ];
 
