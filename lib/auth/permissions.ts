@@ -37,7 +37,10 @@ export type ProjectAction =
   | "record_quarantine"
   | "override_quarantine"
   | "view_livestock"
-  | "record_livestock";
+  | "record_livestock"
+  // Tanks in service: filling in and signing off a visit report (crew on the tank), and the plan itself (lead).
+  | "record_visit"
+  | "manage_service";
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
@@ -58,6 +61,7 @@ const CREW: ProjectAction[] = [
   "record_quarantine",
   "view_livestock",
   "record_livestock",
+  "record_visit",
 ];
 const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message", "see_money", "accept_and_pay", "view_livestock"];
 // The client's signature and card are theirs: nobody accepts or pays in their place.
