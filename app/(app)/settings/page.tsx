@@ -15,8 +15,16 @@ import { DEFAULT_QUARANTINE_DAYS } from "@/lib/stocking/quarantine";
 import { TestKitsPanel } from "./_components/test-kits-panel";
 import { FloorCodeForm } from "./_components/floor-code-form";
 import { getCompanyFloorCode } from "@/db/queries/company-settings";
+import { ServiceTasksForm } from "./_components/service-tasks-form";
+import { getServiceTaskTemplate } from "@/db/queries/service-plans";
+import { DEFAULT_SERVICE_TASKS } from "@/lib/service/default-tasks";
 
 export const metadata: Metadata = { title: "Settings" };
+
+async function serviceTasksOrDefaults(): Promise<string[]> {
+  const saved = await getServiceTaskTemplate();
+  return saved.length ? saved : [...DEFAULT_SERVICE_TASKS];
+}
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
@@ -37,6 +45,7 @@ export default async function SettingsPage() {
       <TestKitsPanel kits={kits} />
       <FloorCodeForm current={floorCode} />
       <QuarantineForm days={quarantineDays} defaultDays={DEFAULT_QUARANTINE_DAYS} />
+      <ServiceTasksForm tasks={await serviceTasksOrDefaults()} />
     </div>
   );
 }
