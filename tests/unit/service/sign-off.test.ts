@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { groupServiceVisits } from "@/lib/service/visit-groups";
 import { mayEditReport, maySignOff, reopenRefusal, signOffRefusal, type SignOffFacts } from "@/lib/service/sign-off";
 
 const open: SignOffFacts = { cancelledAt: null, completedAt: null, visitDay: "2027-03-02", today: "2027-03-02", tasksDone: 2, clientNotes: null };
@@ -33,5 +34,21 @@ describe("sign-off", () => {
     expect(reopenRefusal(crew, { completedAt: new Date() })?.status).toBe(403);
     expect(reopenRefusal(lead, { completedAt: null })?.status).toBe(409);
     expect(reopenRefusal(lead, { completedAt: new Date() })).toBeNull();
+  });
+});
+
+describe("the Service tab's groups", () => {
+  const now = new Date("2027-03-10T12:00:00Z");
+  const v = (startsAt: string, extra: Partial<{ completedAt: Date; cancelledAt: Date }> = {}) => ({ startsAt: new Date(startsAt), completedAt: null, cancelledAt: null, ...extra });
+  it("a visit without a report is overdue a day after its start, not before", () => {
+    const g = groupServiceVisits([v("2027-03-09T11:59:00Z"), v("2027-03-09T12:01:00Z"), v("2027-03-12T09:00:00Z")], now);
+    expect(g.overdue.map((x) => x.startsAt.toISOString())).toEqual(["2027-03-09T11:59:00.000Z"]);
+    expect(g.upcoming).toHaveLength(2);
+  });
+  it("done visits list newest first; skipped ones stay out of the coming list", () => {
+    const g = groupServiceVisits([v("2027-02-01T09:00:00Z", { completedAt: now }), v("2027-02-15T09:00:00Z", { completedAt: now }), v("2027-03-20T09:00:00Z", { cancelledAt: now })], now);
+    expect(g.past.map((x) => x.startsAt.toISOString().slice(0, 10))).toEqual(["2027-02-15", "2027-02-01"]);
+    expect(g.upcoming).toHaveLength(0);
+    expect(g.skipped).toHaveLength(1);
   });
 });

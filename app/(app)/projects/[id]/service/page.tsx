@@ -6,6 +6,7 @@ import { assignablePeople, companyTimeZone, getServicePlan, getServiceTaskTempla
 import { canOnProject } from "@/lib/auth/permissions";
 import { describeRecurrence, parseRule } from "@/lib/service/recurrence";
 import { DEFAULT_SERVICE_TASKS } from "@/lib/service/default-tasks";
+import { groupServiceVisits } from "@/lib/service/visit-groups";
 import { PlanForm } from "./_components/plan-form";
 import { VisitRowActions } from "./_components/visit-row-actions";
 
@@ -21,13 +22,9 @@ export default async function ServicePage({ params }: { params: Promise<{ id: st
   const { project, relation } = await requirePageProject(id, user);
   const lead = canOnProject(relation, "manage_service");
   const team = canOnProject(relation, "view_internal");
-  const [plan, visits, tz] = await Promise.all([getServicePlan(project.id), listServiceVisits(project.id), companyTimeZone()]);
+  const [plan, visits, tz] = await Promise.all([getServicePlan(project.id), listServiceVisits(project.id).then((list) => ({ list, now: new Date() })), companyTimeZone()]);
   const [template, people] = lead ? await Promise.all([getServiceTaskTemplate(), assignablePeople(project.id)]) : [[], []];
-  const now = Date.now();
-  const upcoming = visits.filter((v) => !v.completedAt && !v.cancelledAt && v.startsAt.getTime() + 86_400_000 > now);
-  const overdue = visits.filter((v) => !v.completedAt && !v.cancelledAt && v.startsAt.getTime() + 86_400_000 <= now);
-  const past = visits.filter((v) => v.completedAt).reverse();
-  const skipped = visits.filter((v) => v.cancelledAt && v.startsAt.getTime() > now - 90 * 86_400_000);
+  const { upcoming, overdue, past, skipped } = groupServiceVisits(visits.list, visits.now);
   const recurrence = plan ? parseRule(plan.rule) : null;
   const reportLink = (visitId: string) => `/projects/${project.id}/service/visits/${visitId}`;
 
