@@ -39,7 +39,7 @@ async function tankWithVisitDue() {
   return { t, lead, visitId: first.id, base: `/api/projects/${t.project.id}/service/visits/${first.id}` };
 }
 
-const tick = (s: Session, base: string, taskIndex: number, clientKey = randomUUID()) => s.post(`${base}/ticks`, { taskIndex, done: true, clientKey });
+const tick = (s: Session, base: string, taskIndex: number, clientKey: string = randomUUID()) => s.post(`${base}/ticks`, { taskIndex, done: true, clientKey });
 
 describe("service plans", () => {
   it("writes the next eight weeks of visits, and running it again adds nothing", async () => {
