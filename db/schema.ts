@@ -14,3 +14,4 @@ export * from "./schema/message-reads";
 export * from "./schema/livestock";
 export * from "./schema/sign-in-limits";
 export * from "./schema/service";
+export * from "./schema/visit-reports";

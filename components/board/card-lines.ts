@@ -1,10 +1,10 @@
 import type { BoardCard } from "@/db/queries/board";
-import { sinceWords } from "@/lib/stages/card-words";
+import { dayWords, sinceWords } from "@/lib/stages/card-words";
 
 /** One short line of status on a card. `tone` picks its colour; the words must stand alone. */
 export type StatusLine = { key: string; text: string; tone: "quiet" | "caution" | "ok" | "danger" };
 
-type LineFacts = Pick<BoardCard, "stageEnteredAt" | "lateBy" | "quarantineDaysLeft">;
+type LineFacts = Pick<BoardCard, "stageEnteredAt" | "lateBy" | "quarantineDaysLeft"> & Partial<Pick<BoardCard, "nextServiceVisitAt" | "overdueVisits">>;
 
 const days = (n: number) => `${n} ${n === 1 ? "day" : "days"}`;
 
@@ -27,5 +27,9 @@ export function cardStatusLines(card: LineFacts, now: Date): StatusLine[] {
         : { key: "quarantine", text: "Fish ready to leave quarantine", tone: "ok" },
     );
   }
+  if (card.overdueVisits) {
+    lines.push({ key: "service-overdue", text: `${card.overdueVisits === 1 ? "1 visit" : `${card.overdueVisits} visits`} overdue, no report`, tone: "danger" });
+  }
+  if (card.nextServiceVisitAt) lines.push({ key: "service-next", text: `Next visit ${dayWords(card.nextServiceVisitAt, now)}`, tone: "quiet" });
   return lines;
 }

@@ -7,6 +7,7 @@ import { cycleVerdict, loadCycleInputs, loadRecordFacts, toGateFacts } from "./g
 import { getStageDurations } from "./stage-durations";
 import { nextStageNeeds } from "../../lib/stages/gates";
 import { stageLateness } from "../../lib/stages/durations";
+import { OVERDUE_GRACE_HOURS } from "../../lib/service/overdue";
 import type { Stage } from "../../lib/stages/stages";
 import type { SessionUser } from "../../server/session";
 
@@ -36,6 +37,9 @@ export type BoardCard = {
   nextNeeds: string[] | null;
   /** Days left for the batch of fish in quarantine (the soonest, if several); null when none is. */
   quarantineDaysLeft: number | null;
+  /** In service: the next routine visit not yet done or skipped, and how many are overdue (no report a day after their time). */
+  nextServiceVisitAt: string | null;
+  overdueVisits: number;
 };
 
 export type BoardData = { cards: BoardCard[]; people: BoardPerson[] };
@@ -54,6 +58,7 @@ type Row = {
   lead_name: string | null;
   crew: BoardPerson[] | null;
   unread: number;
+  service: { next: string | null; overdue: number } | null;
 };
 
 /**
@@ -72,7 +77,14 @@ export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new
       cr.crew,
       (select count(*)::int from messages m
         where m.project_id = ${projects.id} and m.author_id = ${projects.clientId}
-          and m.created_at > coalesce((select mr.read_at from message_reads mr where mr.project_id = ${projects.id} and mr.user_id = ${user.id}), '-infinity'::timestamptz)) as unread
+          and m.created_at > coalesce((select mr.read_at from message_reads mr where mr.project_id = ${projects.id} and mr.user_id = ${user.id}), '-infinity'::timestamptz)) as unread,
+      case when ${projects.stage} = 'in_service' then (
+        select json_build_object(
+          'next', min(v.starts_at) filter (where v.starts_at >= ${now.toISOString()}::timestamptz),
+          'overdue', count(*) filter (where v.starts_at < ${now.toISOString()}::timestamptz - make_interval(hours => ${OVERDUE_GRACE_HOURS}))
+        ) from visits v
+        where v.project_id = ${projects.id} and v.kind = 'service visit' and v.cancelled_at is null and v.completed_at is null
+      ) end as service
     from ${projects}
     join users c on c.id = ${projects.clientId}
     left join users l on l.id = ${projects.leadId}
@@ -115,6 +127,8 @@ export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new
       crew,
       nextNeeds: f ? nextStageNeeds(r.stage, f) : null,
       quarantineDaysLeft: rec?.quarantine_days_left ?? null,
+      nextServiceVisitAt: r.service?.next ? new Date(r.service.next).toISOString() : null,
+      overdueVisits: r.service?.overdue ?? 0,
     };
   });
   return { cards, people: [...people.values()].sort((a, b) => a.name.localeCompare(b.name)) };

@@ -4,7 +4,7 @@ import { notices, notificationPrefs, users, company } from "../schema";
 import type { Email } from "../../lib/mail/layout";
 import { env } from "../../env";
 
-export type NoticeKind = "invitation" | "stage_change" | "cycle_ready" | "shared_note" | "message" | "receipt";
+export type NoticeKind = "invitation" | "stage_change" | "cycle_ready" | "shared_note" | "message" | "receipt" | "visit_report";
 
 /**
  * Writes an e-mail to the outbox inside the caller's transaction and queues the job that sends it,

@@ -18,6 +18,7 @@ export type ReadingValues = {
   pH: number | null;
   tempC: number | null;
   khDkh: number | null;
+  salinityPpt?: number | null;
   notes: string | null;
 };
 

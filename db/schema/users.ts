@@ -40,7 +40,7 @@ export const invitations = pgTable("invitations", {
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
 });
 
-export const noticeKinds = ["stage_change", "cycle_ready", "shared_note", "message"] as const;
+export const noticeKinds = ["stage_change", "cycle_ready", "shared_note", "message", "visit_report"] as const;
 
 export const notificationPrefs = pgTable(
   "notification_prefs",

@@ -39,7 +39,10 @@ export type ProjectAction =
   | "view_livestock"
   | "record_livestock"
   // The tank's equipment register and recording a service by hand (the client reads the register).
-  | "edit_equipment";
+  | "edit_equipment"
+  // Tanks in service: filling in and signing off a visit report (crew on the tank), and the plan itself (lead).
+  | "record_visit"
+  | "manage_service";
 
 export type Relation = { role: Role; assigned: boolean; owner: boolean };
 
@@ -61,6 +64,7 @@ const CREW: ProjectAction[] = [
   "view_livestock",
   "record_livestock",
   "edit_equipment",
+  "record_visit",
 ];
 const CLIENT: ProjectAction[] = ["view", "log_water_test", "upload_photo", "send_message", "see_money", "accept_and_pay", "view_livestock"];
 // The client's signature and card are theirs: nobody accepts or pays in their place.

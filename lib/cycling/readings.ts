@@ -23,6 +23,8 @@ export interface WaterTest {
   pH: number | null;
   tempC: number | null;
   khDkh?: number | null;
+  /** Salt water only: practical salinity in ppt (roughly g/kg). */
+  salinityPpt?: number | null;
   /** Entered in error; kept for the record but ignored by every calculation. */
   voided?: boolean;
 }
@@ -69,6 +71,8 @@ export const READING_LIMITS = {
   tempMinC: 0,
   tempMaxC: 40,
   khMaxDkh: 30,
+  /** Natural seawater is about 35 ppt (UNESCO practical salinity scale); 45 leaves room for a brackish-to-hypersaline mistake check, chosen by us. */
+  salinityMaxPpt: 45,
   futureToleranceMinutes: 5,
 } as const;
 
@@ -122,6 +126,12 @@ export function validateReading(input: ReadingInput, now: Date): FieldProblem[] 
     (!isNumber(input.tempC) || input.tempC < READING_LIMITS.tempMinC || input.tempC > READING_LIMITS.tempMaxC)
   ) {
     problems.push({ field: "tempC", message: "Temperature must be between 0 and 40 °C." });
+  }
+  if (
+    input.salinityPpt != null &&
+    (!isNumber(input.salinityPpt) || input.salinityPpt < 0 || input.salinityPpt > READING_LIMITS.salinityMaxPpt)
+  ) {
+    problems.push({ field: "salinityPpt", message: `Salinity must be between 0 and ${READING_LIMITS.salinityMaxPpt} ppt (sea water is about 35).` });
   }
   return problems;
 }

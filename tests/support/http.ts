@@ -115,6 +115,9 @@ export class Session {
   patch(path: string, body?: unknown) {
     return this.request("PATCH", path, body);
   }
+  put(path: string, body?: unknown) {
+    return this.request("PUT", path, body);
+  }
 }
 
 export async function signedIn(user: { email: string }): Promise<Session> {

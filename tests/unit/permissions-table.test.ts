@@ -7,13 +7,14 @@ const ACTIONS: ProjectAction[] = [
   "view", "move", "override_gate", "edit_survey", "approve_load", "tick_checklist", "untick_checklist",
   "log_water_test", "void_water_test", "log_dose", "record_stocking", "upload_photo", "write_note",
   "send_message", "edit_details", "view_internal", "file_stage_photos", "finish_others_upload",
+  "record_visit", "manage_service",
 ];
 
 // The permission table as the design states it: crew work on the install; clients view, log tests,
 // upload photos and message; everything else is the lead's alone.
 const CREW_MAY = [
   "view", "move", "edit_survey", "tick_checklist", "log_water_test", "log_dose", "record_stocking", "upload_photo",
-  "send_message", "view_internal", "file_stage_photos",
+  "send_message", "view_internal", "file_stage_photos", "record_visit",
 ];
 const CLIENT_MAY = ["view", "log_water_test", "upload_photo", "send_message"];
 

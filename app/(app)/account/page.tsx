@@ -14,7 +14,7 @@ export default async function AccountPage() {
   const user = await requirePageUser();
   const [prefs, contact, token] = await Promise.all([getPrefs(user.id), getContact(user.id), getCalendarToken(user.id)]);
   // Cycle-ready e-mails go to staff and clients alike; every role sees every kind.
-  const kinds = ["stage_change", "cycle_ready", "shared_note", "message"] as const;
+  const kinds = ["stage_change", "cycle_ready", "shared_note", "message", ...(user.role === "client" ? (["visit_report"] as const) : [])] as const;
   return (
     <div className="mx-auto flex max-w-2xl flex-col gap-4">
       <h1 className="text-2xl font-bold tracking-tight">Account</h1>

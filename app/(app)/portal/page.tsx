@@ -60,6 +60,11 @@ export default async function PortalPage() {
                   <StageBadge stage={p.stage} />
                 </div>
                 <NextStep next={p.next} />
+                {p.stage === "in_service" && (
+                  <Link href={`/projects/${p.id}/service`} className="text-sm font-semibold text-accent hover:underline">
+                    Service plan, next visits and visit reports
+                  </Link>
+                )}
               </article>
             </li>
           ))}

@@ -20,8 +20,16 @@ import { effectiveKindIntervals } from "@/lib/service/equipment-due";
 import { DEFAULT_SERVICE_INTERVAL_DAYS } from "@/lib/service/equipment-kinds";
 import { TimeZoneForm } from "./_components/time-zone-form";
 import { EquipmentIntervalsForm } from "./_components/equipment-intervals-form";
+import { ServiceTasksForm } from "./_components/service-tasks-form";
+import { getServiceTaskTemplate } from "@/db/queries/service-plans";
+import { DEFAULT_SERVICE_TASKS } from "@/lib/service/default-tasks";
 
 export const metadata: Metadata = { title: "Settings" };
+
+async function serviceTasksOrDefaults(): Promise<string[]> {
+  const saved = await getServiceTaskTemplate();
+  return saved.length ? saved : [...DEFAULT_SERVICE_TASKS];
+}
 
 /** Company-wide settings, one section each; the lead only. */
 export default async function SettingsPage() {
@@ -46,6 +54,7 @@ export default async function SettingsPage() {
       <QuarantineForm days={quarantineDays} defaultDays={DEFAULT_QUARANTINE_DAYS} />
       <TimeZoneForm current={service.timeZone} zones={zones} />
       <EquipmentIntervalsForm intervals={effectiveKindIntervals(service.equipmentIntervals)} commonPractice={{ ...DEFAULT_SERVICE_INTERVAL_DAYS }} />
+      <ServiceTasksForm tasks={await serviceTasksOrDefaults()} />
     </div>
   );
 }

@@ -20,3 +20,21 @@ describe("a card's status lines", () => {
     expect(cardStatusLines({ ...base, quarantineDaysLeft: 0 }, now)[1]).toEqual({ key: "quarantine", text: "Fish ready to leave quarantine", tone: "ok" });
   });
 });
+
+describe("a card in service", () => {
+  it("shows the next visit's day, quietly", () => {
+    expect(cardStatusLines({ ...base, nextServiceVisitAt: "2026-12-08T09:00:00Z", overdueVisits: 0 }, now)).toEqual([
+      { key: "since", text: "here since yesterday", tone: "quiet" },
+      { key: "service-next", text: "Next visit 8 Dec", tone: "quiet" },
+    ]);
+  });
+  it("puts overdue visits before the next one, as a danger line", () => {
+    const lines = cardStatusLines({ ...base, nextServiceVisitAt: "2027-01-05T09:00:00Z", overdueVisits: 2 }, now);
+    expect(lines[1]).toEqual({ key: "service-overdue", text: "2 visits overdue, no report", tone: "danger" });
+    expect(lines[2].text).toBe("Next visit 5 Jan 2027");
+    expect(cardStatusLines({ ...base, overdueVisits: 1 }, now)[1].text).toBe("1 visit overdue, no report");
+  });
+  it("a card with no plan shows no service line", () => {
+    expect(cardStatusLines({ ...base, nextServiceVisitAt: null, overdueVisits: 0 }, now)).toHaveLength(1);
+  });
+});

@@ -26,7 +26,7 @@ export default async function ProjectLayout({ children, params }: { children: Re
           {project.tankSummary && ` · ${project.tankSummary}`}
         </p>
         <ProgressTrack stage={project.stage} />
-        <ProjectTabs tabs={projectTabsFor(project.id, user.role)} />
+        <ProjectTabs tabs={projectTabsFor(project.id, user.role, project.stage)} />
       </header>
       {children}
     </div>

@@ -23,6 +23,7 @@ export function readingFromInput(input: WaterTestValues, unitSystem: "metric" | 
     pH: input.pH,
     tempC,
     khDkh: input.khDkh,
+    salinityPpt: input.salinityPpt,
     notes: input.notes,
   };
   const problems = validateReading(values, now);

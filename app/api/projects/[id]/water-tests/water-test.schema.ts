@@ -17,9 +17,10 @@ export const waterTestSchema = z
     temperature: optionalNumber("Temperature must be a number."),
     temperatureUnit: z.enum(["C", "F"], { message: "Temperature unit must be C or F." }).optional(),
     khDkh: optionalNumber("KH must be a number in dKH."),
+    salinityPpt: optionalNumber("Salinity must be a number in ppt."),
     notes: optionalNotes,
   })
-  .refine((v) => [v.ammoniaMgL, v.nitriteMgL, v.nitrateMgL, v.pH, v.temperature, v.khDkh].some((x) => x !== null), {
+  .refine((v) => [v.ammoniaMgL, v.nitriteMgL, v.nitrateMgL, v.pH, v.temperature, v.khDkh, v.salinityPpt].some((x) => x !== null), {
     message: "Enter at least one result.",
     path: ["ammoniaMgL"],
   });

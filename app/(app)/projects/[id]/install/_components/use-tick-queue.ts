@@ -10,8 +10,18 @@ export type SavedTick = { itemId: string; done: boolean; note: string | null; va
  * reached the server before the connection dropped isn't applied twice. Network failures retry with
  * backoff (and at once when the browser says it is back online); a refusal is handed back to show.
  */
-export function useTickQueue(projectId: string, handlers: { onSaved: (t: SavedTick, q: QueuedTick) => void; onRefused: (q: QueuedTick, error: string) => void }) {
-  const storageKey = queueStorageKey(projectId);
+export function useTickQueue<T = SavedTick>(
+  projectId: string,
+  handlers: { onSaved: (t: T, q: QueuedTick) => void; onRefused: (q: QueuedTick, error: string) => void },
+  /** Another list of ticks (a service visit's tasks): its own address, its own stored queue, its own body. */
+  target?: { url: string; storageKey: string; body: (q: QueuedTick) => Record<string, unknown> },
+) {
+  const storageKey = target?.storageKey ?? queueStorageKey(projectId);
+  const url = target?.url ?? `/api/projects/${projectId}/checklist/ticks`;
+  const bodyRef = useRef(target?.body);
+  useEffect(() => {
+    bodyRef.current = target?.body;
+  });
   const [queue, setQueue] = useState<QueuedTick[]>([]);
   const [lastError, setLastError] = useState<string | null>(null);
   const queueRef = useRef<QueuedTick[]>([]);
@@ -46,14 +56,10 @@ export function useTickQueue(projectId: string, handlers: { onSaved: (t: SavedTi
     try {
       while (queueRef.current.length) {
         const q = queueRef.current[0];
-        const res = await sendJson<{ tick: SavedTick }>(`/api/projects/${projectId}/checklist/ticks`, "POST", {
-          itemId: q.itemId,
-          done: q.done,
-          note: q.note,
-          value: q.value,
-          attachmentId: q.attachmentId,
-          clientKey: q.clientKey,
-        });
+        const body = bodyRef.current
+          ? { ...bodyRef.current(q), clientKey: q.clientKey }
+          : { itemId: q.itemId, done: q.done, note: q.note, value: q.value, attachmentId: q.attachmentId, clientKey: q.clientKey };
+        const res = await sendJson<{ tick: T }>(url, "POST", body);
         if (!res.ok && isRetryable(res.status)) {
           setLastError(res.status === 0 ? "No connection. Ticks are kept on this phone and sent when the signal returns." : res.error);
           const delay = retryDelayMs(attempt.current++);
@@ -69,7 +75,7 @@ export function useTickQueue(projectId: string, handlers: { onSaved: (t: SavedTi
     } finally {
       sending.current = false;
     }
-  }, [projectId, store]);
+  }, [url, store]);
 
   useEffect(() => {
     const saved = parseQueue(localStorage.getItem(storageKey));

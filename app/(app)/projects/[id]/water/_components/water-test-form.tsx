@@ -55,6 +55,7 @@ export function WaterTestForm({
     temperature: r?.tempC == null ? "" : text(unit === "F" ? celsiusToFahrenheit(r.tempC) : r.tempC),
     temperatureUnit: unit,
     khDkh: text(r?.khDkh),
+    salinityPpt: text((r as { salinityPpt?: number | null } | undefined)?.salinityPpt),
     notes: r?.notes ?? "",
     ...(r ? { reason: "" } : {}),
   });
@@ -113,6 +114,9 @@ export function WaterTestForm({
       </Field>
       <Field id={`${idp}-kh`} label="Carbonate hardness, KH (dKH, optional)" error={err("khDkh")}>
         <input id={`${idp}-kh`} inputMode="decimal" className={`${inputStyles} num`} aria-invalid={!!e.khDkh} {...register("khDkh")} />
+      </Field>
+      <Field id={`${idp}-sal`} label="Salinity, salt water only (ppt, optional)" error={err("salinityPpt")}>
+        <input id={`${idp}-sal`} inputMode="decimal" className={`${inputStyles} num`} aria-invalid={!!e.salinityPpt} {...register("salinityPpt")} />
       </Field>
       <div className="sm:col-span-3">
         <Field id={`${idp}-notes`} label="Notes (optional)" error={err("notes")}>
