@@ -16,6 +16,9 @@
  * From any start the gap to b shrinks by (1 − f) per cycle, so the tank approaches it geometrically.
  */
 
+/** The planner's starting limit: a level many keepers aim to stay under for community fish (common practice, not a standard). */
+export const DEFAULT_NITRATE_LIMIT_MGL = 40;
+
 export type WaterChangeRoutine = {
   /** How fast nitrate rises between changes, mg/L per day (≥ 0). */
   risePerDayMgL: number;

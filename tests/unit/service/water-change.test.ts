@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
   afterOneChange,
+  DEFAULT_NITRATE_LIMIT_MGL,
   litresToChange,
   longestIntervalDays,
   sawtoothPoints,
@@ -289,5 +290,11 @@ describe("whole days and whole percentages for the plan", () => {
     expect(wholePercentAtLeast(0.2)).toBe(20);
     expect(wholePercentAtLeast(0.07)).toBe(7);
     expect(wholePercentAtLeast(0.2000001)).toBe(21);
+  });
+});
+
+describe("the planner's default limit", () => {
+  it("starts at 40 mg/L nitrate (common practice for many freshwater community fish, not a standard)", () => {
+    expect(DEFAULT_NITRATE_LIMIT_MGL).toBe(40);
   });
 });

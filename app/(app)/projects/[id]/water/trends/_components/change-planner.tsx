@@ -4,6 +4,7 @@ import { format } from "date-fns";
 import { Field } from "@/components/ui/field";
 import { inputStyles } from "@/components/ui/button-styles";
 import {
+  DEFAULT_NITRATE_LIMIT_MGL,
   litresToChange,
   longestIntervalDays,
   sawtoothPoints,
@@ -16,9 +17,6 @@ import { toDisplay, unitLabel, type UnitSystem } from "@/lib/tank/units";
 import { SawtoothChart } from "./sawtooth-chart";
 
 export type MeasuredRise = { risePerDayMgL: number; pairs: number; fromAt: string; toAt: string };
-
-/** A nitrate level many keepers aim to stay under for community fish: common practice, not a standard. */
-export const DEFAULT_NITRATE_LIMIT_MGL = 40;
 
 const num = (s: string) => (s.trim() === "" ? Number.NaN : Number(s.trim().replace(",", ".")));
 const mgL = (n: number) => `${n < 10 ? n.toFixed(1) : Math.round(n)} mg/L`;
@@ -95,7 +93,7 @@ export function ChangePlanner({ measuredRise, netVolumeL, unitSystem }: { measur
         <Field id="plan-tap" label="Tap water nitrate (mg/L)" hint="Test the tap water, or ask the water supplier.">
           <input id="plan-tap" inputMode="decimal" className={`${inputStyles} num`} value={tap} onChange={(e) => setTap(e.target.value)} />
         </Field>
-        <Field id="plan-limit" label="Keep nitrate under (mg/L)" hint="40 mg/L is common practice for many freshwater fish; some need less.">
+        <Field id="plan-limit" label="Keep nitrate under (mg/L)" hint={`${DEFAULT_NITRATE_LIMIT_MGL} mg/L is common practice for many freshwater fish; some need less.`}>
           <input id="plan-limit" inputMode="decimal" className={`${inputStyles} num`} value={limit} onChange={(e) => setLimit(e.target.value)} />
         </Field>
       </div>
