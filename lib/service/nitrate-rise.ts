@@ -39,18 +39,16 @@ export function estimateNitrateRise(readings: NitrateReading[], now: Date, optio
   const tests = readings
     .filter((r): r is { takenAt: Date; nitrateMgL: number } => r.nitrateMgL !== null && r.takenAt.getTime() >= since && r.takenAt.getTime() <= now.getTime())
     .sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime());
-  const rates: number[] = [];
-  let fromAt: Date | null = null;
-  let toAt: Date | null = null;
+  const pairs: { rate: number; fromAt: Date; toAt: Date }[] = [];
   for (let i = 1; i < tests.length; i++) {
     const a = tests[i - 1];
     const b = tests[i];
     const days = (b.takenAt.getTime() - a.takenAt.getTime()) / DAY_MS;
     if (days < minGapDays || b.nitrateMgL <= a.nitrateMgL) continue;
-    rates.push((b.nitrateMgL - a.nitrateMgL) / days);
-    fromAt ??= a.takenAt;
-    toAt = b.takenAt;
+    pairs.push({ rate: (b.nitrateMgL - a.nitrateMgL) / days, fromAt: a.takenAt, toAt: b.takenAt });
   }
-  if (rates.length < minPairs || !fromAt || !toAt) return null;
-  return { risePerDayMgL: median(rates.sort((x, y) => x - y)), pairs: rates.length, fromAt, toAt };
+  // At least one pair, whatever minPairs says: no pair is no measurement.
+  if (pairs.length < Math.max(1, minPairs)) return null;
+  const rates = pairs.map((p) => p.rate).sort((x, y) => x - y);
+  return { risePerDayMgL: median(rates), pairs: pairs.length, fromAt: pairs[0].fromAt, toAt: pairs[pairs.length - 1].toAt };
 }

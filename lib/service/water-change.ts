@@ -116,6 +116,7 @@ export function smallestChangeFraction(o: { risePerDayMgL: number; intervalDays:
   checkLimit(o.limitMgL);
   const headroom = o.limitMgL - o.tapNitrateMgL;
   if (o.risePerDayMgL === 0) return headroom < 0 ? null : 0;
+  // Stryker disable next-line EqualityOperator: at zero headroom R·T/0 is Infinity, which the > 1 check below also turns into null
   if (headroom <= 0) return null;
   const fraction = (o.risePerDayMgL * o.intervalDays) / headroom;
   return fraction > 1 ? null : fraction;

@@ -46,6 +46,11 @@ describe("estimateNitrateRise", () => {
     expect(estimateNitrateRise([r(10, 10), r(3, 17)], now, { minPairs: 1 })!.risePerDayMgL).toBeCloseTo(1, 9);
   });
 
+  it("no rising pair is no measurement, even when no minimum is asked for", () => {
+    expect(estimateNitrateRise([r(20, 10), r(13, 5)], now, { minPairs: 0 })).toBeNull();
+    expect(estimateNitrateRise([], now, { minPairs: 0 })).toBeNull();
+  });
+
   it("a flat pair says nothing about the rise", () => {
     expect(estimateNitrateRise([r(20, 10), r(13, 10), r(6, 10)], now, { minPairs: 1 })).toBeNull();
   });

@@ -238,6 +238,7 @@ describe("smallestChangeFraction", () => {
   });
   it("tap at or over the limit with a rise: no fraction helps", () => {
     expect(smallestChangeFraction({ risePerDayMgL: 1, intervalDays: 7, tapNitrateMgL: 40, limitMgL: 40 })).toBeNull();
+    expect(smallestChangeFraction({ risePerDayMgL: 1, intervalDays: 7, tapNitrateMgL: 60, limitMgL: 40 })).toBeNull();
   });
   it("checks its inputs", () => {
     expect(() => smallestChangeFraction({ risePerDayMgL: 1, intervalDays: 0, tapNitrateMgL: 0, limitMgL: 40 })).toThrow("The days between changes must be more than 0 (got 0).");
