@@ -66,3 +66,12 @@ describe("the house defaults, value by value", () => {
     });
   });
 });
+
+describe("validateCycleRules: numbers only, finite, within bounds", () => {
+  it("a number written as text is refused even where the rule allows fractions", () => {
+    expect(validateCycleRules({ stallChangeMgL: "0.5" })).toEqual([{ field: "stallChangeMgL", message: "Smallest change that counts as progress (mg/L) must be a number from 0.01 to 5." }]);
+  });
+  it("NaN and infinity are refused", () => {
+    expect(validateCycleRules({ stallChangeMgL: Number.NaN, maxAgeHoursOfLatest: Number.POSITIVE_INFINITY }).map((p) => p.field)).toEqual(["maxAgeHoursOfLatest", "stallChangeMgL"]);
+  });
+});
