@@ -8,6 +8,7 @@ import { seedDemoMoney } from "./demo-money";
 import { seedDemoLivestock } from "./demo-livestock";
 import { seedDemoEquipment } from "./demo-equipment";
 import { seedDemoService } from "./demo-service";
+import { seedDemoServiceWater } from "./demo-service-water";
 
 /** What a feature's demo seed gets: today, and the ids of the demo projects and people by key. */
 export type DemoContext = { now: Date; projectIds: Record<string, string>; peopleIds: Record<string, string> };
@@ -25,4 +26,5 @@ export const DEMO_FEATURE_SEEDS: FeatureSeed[] = [
   seedDemoLivestock,
   seedDemoEquipment,
   seedDemoService,
+  seedDemoServiceWater,
 ];

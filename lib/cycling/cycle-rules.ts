@@ -68,7 +68,8 @@ export function validateCycleRules(partial: Partial<Record<keyof CycleRules, unk
     if (value === undefined) continue;
     const { min, max, integer, label } = NUMERIC_BOUNDS[field];
     const ok =
-      typeof value === "number" && Number.isFinite(value) && value >= min && value <= max &&
+      // NaN fails both comparisons and an infinity fails one, so the bounds also keep out non-finite numbers.
+      typeof value === "number" && value >= min && value <= max &&
       (!integer || Number.isInteger(value));
     if (!ok) {
       problems.push({ field, message: `${label} must be ${integer ? "a whole number" : "a number"} from ${min} to ${max}.` });

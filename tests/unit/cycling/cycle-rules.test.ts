@@ -50,3 +50,28 @@ describe("resolveCycleRules", () => {
     expect(Object.isFrozen(DEFAULT_CYCLE_RULES)).toBe(true);
   });
 });
+
+describe("the house defaults, value by value", () => {
+  it("two zeros 24 h apart, the latest at most 48 h old, nitrate seen, a dose cleared in 24 h, a stall after 10 days without a 0.25 mg/L change", () => {
+    // Common practice for fishless cycling (our reading of it); 0.25 mg/L is the smallest non-zero
+    // step on typical kits (common practice, from memory). See lib/cycling/cycle-rules.ts.
+    expect({ ...DEFAULT_CYCLE_RULES }).toEqual({
+      zeroReadingsNeeded: 2,
+      minHoursBetweenZeros: 24,
+      maxAgeHoursOfLatest: 48,
+      requireNitrate: true,
+      clearWithinHoursOfDose: 24,
+      stallDays: 10,
+      stallChangeMgL: 0.25,
+    });
+  });
+});
+
+describe("validateCycleRules: numbers only, finite, within bounds", () => {
+  it("a number written as text is refused even where the rule allows fractions", () => {
+    expect(validateCycleRules({ stallChangeMgL: "0.5" })).toEqual([{ field: "stallChangeMgL", message: "Smallest change that counts as progress (mg/L) must be a number from 0.01 to 5." }]);
+  });
+  it("NaN and infinity are refused", () => {
+    expect(validateCycleRules({ stallChangeMgL: Number.NaN, maxAgeHoursOfLatest: Number.POSITIVE_INFINITY }).map((p) => p.field)).toEqual(["maxAgeHoursOfLatest", "stallChangeMgL"]);
+  });
+});

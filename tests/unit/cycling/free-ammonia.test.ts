@@ -119,3 +119,11 @@ describe("unionizedAmmoniaFraction properties", () => {
     );
   });
 });
+
+describe("free ammonia: out-of-range inputs are refused with the range in words", () => {
+  it("pH, temperature and total ammonia", () => {
+    expect(() => unionizedAmmoniaFraction(14.5, 25)).toThrow(new RangeError("pH must be between 0 and 14 (got 14.5)."));
+    expect(() => unionizedAmmoniaFraction(7, 41)).toThrow(new RangeError("Temperature must be between 0 and 40 °C (got 41)."));
+    expect(() => freeAmmoniaMgL(-1, 7, 25)).toThrow(new RangeError("Total ammonia must be 0 or more (got -1)."));
+  });
+});

@@ -57,3 +57,14 @@ describe("describeCycleForClient", () => {
     );
   });
 });
+
+describe("describeCycleForClient: the textbook sentence needs both trends", () => {
+  it("ammonia steady while nitrite rises is not called 'ammonia is falling'", () => {
+    const readings = [0, 1, 2].map((d) => reading(at(d), { ammoniaMgL: 2, nitriteMgL: [0.25, 0.5, 1][d], nitrateMgL: 0 }));
+    const evaluation = evaluateCycle(readings, { now: at(2, 1) });
+    expect(evaluation.phase).toBe("ammonia-falling");
+    expect(describeCycleForClient(evaluation, readings)).toBe(
+      "Ammonia is holding steady and nitrite is rising: the first bacteria are still establishing. About two to four more weeks is common.",
+    );
+  });
+});

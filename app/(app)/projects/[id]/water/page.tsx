@@ -97,6 +97,12 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
           </p>
         )}
         {canRestart && <RestartCycleButton projectId={project.id} />}
+        <p className="text-sm">
+          <Link href={`/projects/${project.id}/water/trends`} className="text-accent underline">
+            Trends & water changes
+          </Link>
+          <span className="text-muted"> — nitrate, pH and temperature over the months, and where a water-change routine settles.</span>
+        </p>
       </section>
 
       {canChooseKits && <KitChoice projectId={project.id} chosen={kits} kits={companyKits} />}
