@@ -56,10 +56,15 @@ async function phoneContext(cookies: Awaited<ReturnType<typeof cookieFor>>): Pro
   await context.addCookies(cookies);
   // The last largest-contentful-paint entry is the page's LCP.
   await context.addInitScript(() => {
-    const w = window as unknown as { __lcp: number | null };
+    const w = window as unknown as { __lcp: number | null; __lcpWhat: string };
     w.__lcp = null;
+    w.__lcpWhat = "";
     new PerformanceObserver((list) => {
-      for (const e of list.getEntries()) w.__lcp = e.startTime;
+      for (const e of list.getEntries() as (PerformanceEntry & { element?: Element | null; size?: number })[]) {
+        w.__lcp = e.startTime;
+        const el = e.element;
+        w.__lcpWhat = el ? `<${el.tagName.toLowerCase()}> "${(el.textContent ?? "").trim().slice(0, 40)}"` : "(removed element)";
+      }
     }).observe({ type: "largest-contentful-paint", buffered: true });
   });
   return context;
@@ -84,10 +89,23 @@ async function firstLoad(path: string, cookies: Awaited<ReturnType<typeof cookie
   });
   const res = await page.goto(`${BASE}${path}`, { waitUntil: "load", timeout: 120_000 });
   await page.waitForLoadState("networkidle", { timeout: 60_000 }).catch(() => {});
-  const lcp = await page.evaluate(() => (window as unknown as { __lcp: number | null }).__lcp);
+  const { lcp, what, fcp, html, css } = await page.evaluate(() => {
+    const w = window as unknown as { __lcp: number | null; __lcpWhat: string };
+    const nav = performance.getEntriesByType("navigation")[0] as PerformanceNavigationTiming | undefined;
+    const paint = performance.getEntriesByName("first-contentful-paint")[0];
+    const res = performance.getEntriesByType("resource") as PerformanceResourceTiming[];
+    const css = res.filter((r) => r.initiatorType === "link" && r.name.includes(".css"));
+    return {
+      lcp: w.__lcp,
+      what: w.__lcpWhat,
+      fcp: paint?.startTime ?? null,
+      html: nav ? { end: nav.responseEnd, bytes: nav.transferSize } : null,
+      css: css.map((r) => ({ end: r.responseEnd, bytes: r.transferSize })),
+    };
+  });
   const js = await Promise.all(scripts);
   await context.close();
-  return { status: res?.status() ?? 0, finalPath: new URL(page.url()).pathname, lcp, sent: js.reduce((a, s) => a + s.sent, 0), gzipped: js.reduce((a, s) => a + s.gzipped, 0), files: js.length, js };
+  return { status: res?.status() ?? 0, finalPath: new URL(page.url()).pathname, lcp, what, fcp, html, css, sent: js.reduce((a, s) => a + s.sent, 0), gzipped: js.reduce((a, s) => a + s.gzipped, 0), files: js.length, js };
 }
 
 const [install] = await db().select({ id: projects.id, title: projects.title }).from(projects).where(eq(projects.stage, "aquascape")).limit(1);
@@ -115,6 +133,10 @@ for (const p of pages) {
   const where = last.finalPath === p.path ? "" : ` (ended on ${last.finalPath}, status ${last.status})`;
   console.log(`${p.label.padEnd(48)} ${lcp.toFixed(0).padStart(7)}  ${(last.sent / 1000).toFixed(1).padStart(10)}  ${(last.gzipped / 1000).toFixed(1).padStart(10)}  ${String(last.files).padStart(5)}  ${ok ? "met" : "NOT met"}${where}`);
   const biggest = [...last.js].sort((a, b) => b.gzipped - a.gzipped).slice(0, 4);
+  const cssEnd = Math.max(0, ...last.css.map((c) => c.end));
+  details.push(
+    `${p.label}: FCP ${last.fcp?.toFixed(0)} ms; LCP element ${last.what}; HTML ${((last.html?.bytes ?? 0) / 1000).toFixed(1)} kB sent, done at ${last.html?.end.toFixed(0)} ms; CSS ${(last.css.reduce((a, c) => a + c.bytes, 0) / 1000).toFixed(1)} kB, done at ${cssEnd.toFixed(0)} ms`,
+  );
   details.push(`${p.label}: largest scripts ${biggest.map((s) => `${s.url.split("/").pop()} ${(s.gzipped / 1000).toFixed(1)} kB`).join(", ")}`);
 }
 console.log(details.join("\n"));
