@@ -97,10 +97,13 @@ export async function getBoard(user: Pick<SessionUser, "id" | "role">, now = new
     from ${projects}
     join users c on c.id = ${projects.clientId}
     left join users l on l.id = ${projects.leadId}
-    left join lateral (
-      select json_agg(json_build_object('id', u.id, 'name', u.name) order by u.name) as crew
-      from project_crew pc join users u on u.id = pc.user_id where pc.project_id = ${projects.id}
-    ) cr on true
+    left join (
+      -- Grouped once for the board's cards only (not per card, and not for the whole portfolio).
+      select pc.project_id, json_agg(json_build_object('id', u.id, 'name', u.name) order by u.name) as crew
+      from project_crew pc join users u on u.id = pc.user_id
+      where pc.project_id in (select ${projects.id} from ${projects} where ${onBoard})
+      group by pc.project_id
+    ) cr on cr.project_id = ${projects.id}
     where ${onBoard}
     ) b on true
     order by b.stage, b.position collate "C", b.id
