@@ -52,6 +52,11 @@ const schema = z.object({
   NOTICE_DELAY_SECONDS: z.coerce.number().int().min(0).max(3600).default(120),
   /** Turns on development-only pages (the caught-mail viewer). Never set in production. */
   TANKWRIGHT_DEV_TOOLS: bool,
+  /**
+   * Adds a Server-Timing header to signed-in API answers: the session check, each board query, the
+   * gates and the JSON. Only the benchmark sets it; off in production.
+   */
+  BENCH_TIMING: bool,
 });
 
 export type Env = z.infer<typeof schema>;

@@ -1,5 +1,6 @@
 /**
- * Seeds the benchmark database with 500 invented active projects, their clients and crew, stage
+ * Seeds the benchmark database with 500 invented active projects (those in service handed over in
+ * the last two weeks), their clients and crew, stage
  * events, some surveys, checklist ticks, leak checks and water tests. Run only against a fresh database.
  */
 import { hashPassword } from "../lib/auth/passwords";
@@ -56,7 +57,8 @@ const rows = Array.from({ length: PROJECTS }, (_, i) => {
     siteTown: town,
     stage,
     position: keys.get(stage)!.shift()!,
-    stageEnteredAt: new Date(now - Math.floor(random() * 30) * DAY),
+    // Tanks in service among the active work were handed over recently (the board shows those).
+    stageEnteredAt: new Date(now - Math.floor(random() * (stage === "in_service" ? 13 : 30)) * DAY),
     targetInstallDate: new Date(now + Math.floor(random() * 120 - 40) * DAY).toISOString().slice(0, 10),
     tankSummary: `${pick([900, 1200, 1500, 1800])} × 500 × 600 mm ${pick(KINDS)}`,
   };

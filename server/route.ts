@@ -9,6 +9,7 @@ import { loadProjectRelation, type ProjectRow } from "../db/queries/project-acce
 import { canOnProject, canSeeProject, type ProjectAction, type Relation } from "../lib/auth/permissions";
 import type { Role } from "../lib/auth/roles";
 import { parseId } from "./ids";
+import { serverTimingHeader, timed, withTiming } from "./timing";
 
 export { parseId };
 
@@ -63,9 +64,14 @@ export function userRoute<S extends z.ZodType | undefined = undefined, Q extends
   handler: (ctx: UserContext<S, Q, P>) => Promise<Response>,
 ): Handler<P> {
   return checked<P>(opts, { kind: "user", roles: opts.roles ?? [] }, async (req, params) => {
-    const user = await requireUser(...(opts.roles ?? []));
-    const parsed = await readInput(req, opts);
-    return handler({ req, params, user, ...parsed } as UserContext<S, Q, P>);
+    // With BENCH_TIMING set, the answer says where its time went (server/timing.ts); otherwise this is a plain call.
+    const { result, parts } = await withTiming(async () => {
+      const user = await timed("session", () => requireUser(...(opts.roles ?? [])));
+      const parsed = await readInput(req, opts);
+      return timed("handler", () => handler({ req, params, user, ...parsed } as UserContext<S, Q, P>));
+    });
+    if (parts) result.headers.set("server-timing", serverTimingHeader(parts));
+    return result;
   });
 }
 

@@ -1,4 +1,5 @@
 "use client";
+import Link from "next/link";
 import { useDroppable } from "@dnd-kit/core";
 import { SortableContext, verticalListSortingStrategy } from "@dnd-kit/sortable";
 import type { BoardCard as Card } from "@/db/queries/board";
@@ -7,6 +8,7 @@ import { TankMark } from "@/components/ui/tank-mark";
 import { STAGE_TONE } from "@/components/ui/stage-tone";
 import { BoardCard } from "./board-card";
 import { installsWords } from "./count-words";
+import { inServiceHeaderWords } from "@/lib/stages/in-service-attention";
 
 export const columnId = (stage: Stage) => `column:${stage}`;
 
@@ -14,7 +16,8 @@ export const columnId = (stage: Stage) => `column:${stage}`;
  * One stage's column, headed by the tank as it stands at that stage; the whole column is a drop
  * target so an empty stage can take a card. On a phone only the chosen stage's column shows.
  */
-export function BoardColumn({ stage, cards, now, errors, saving, shownOnPhone, onMoveTo }: { stage: Stage; cards: Card[]; now: Date; errors: Record<string, string[]>; saving: string | null; shownOnPhone: boolean; onMoveTo: (card: Card) => void }) {
+export function BoardColumn({ stage, cards, rest = 0, now, errors, saving, shownOnPhone, onMoveTo }: { stage: Stage; cards: Card[]; rest?: number; now: Date; errors: Record<string, string[]>; saving: string | null; shownOnPhone: boolean; onMoveTo: (card: Card) => void }) {
+  const inService = stage === "in_service";
   const { setNodeRef, isOver } = useDroppable({ id: columnId(stage), data: { stage } });
   const tone = STAGE_TONE[stage];
   return (
@@ -29,7 +32,14 @@ export function BoardColumn({ stage, cards, now, errors, saving, shownOnPhone, o
           <h2 id={`col-${stage}`} className={`text-sm font-semibold leading-tight ${tone.text}`}>
             {STAGE_LABELS[stage]}
           </h2>
-          <p className="text-xs text-muted">{installsWords(cards.length)}</p>
+          <p className="text-xs text-muted" data-testid={inService ? "in-service-count" : undefined}>
+            {inService ? inServiceHeaderWords(cards.length, rest) : installsWords(cards.length)}
+          </p>
+          {inService && (
+            <Link href="/board/in-service" className="text-xs font-semibold text-accent hover:underline" data-testid="in-service-all">
+              All tanks in service
+            </Link>
+          )}
         </div>
       </header>
       <SortableContext id={columnId(stage)} items={cards.map((c) => c.id)} strategy={verticalListSortingStrategy}>
@@ -37,7 +47,7 @@ export function BoardColumn({ stage, cards, now, errors, saving, shownOnPhone, o
           {cards.map((c) => (
             <BoardCard key={c.id} card={c} now={now} error={errors[c.id]} saving={saving === c.id} onMoveTo={onMoveTo} />
           ))}
-          {cards.length === 0 && <li className="rounded-lg border border-dashed border-line px-2 py-4 text-center text-xs text-muted">Nothing at this stage</li>}
+          {cards.length === 0 && <li className="rounded-lg border border-dashed border-line px-2 py-4 text-center text-xs text-muted">{inService ? "Nothing needs attention" : "Nothing at this stage"}</li>}
         </ul>
       </SortableContext>
     </section>

@@ -62,7 +62,9 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
     for (const s of STAGES) out[s].sort(compareKeys);
     return out;
   }, [visible]);
-  const counts = useMemo(() => Object.fromEntries(STAGES.map((s) => [s, columns[s].length])) as Record<Stage, number>, [columns]);
+  // Tanks in service that need no attention are counted, not loaded; the switcher's count includes them.
+  const inServiceRest = data.inServiceRest ?? 0;
+  const counts = useMemo(() => Object.fromEntries(STAGES.map((s) => [s, columns[s].length + (s === "in_service" ? inServiceRest : 0)])) as Record<Stage, number>, [columns, inServiceRest]);
   const byId = useCallback((id: string) => data.cards.find((c) => c.id === id) ?? null, [data.cards]);
 
   const sensors = useSensors(
@@ -174,7 +176,7 @@ export function Board({ initial, role, initialFilters, nowIso }: { initial: Boar
         <StageSwitcher counts={counts} chosen={phoneStage} onChoose={setPhoneStage} />
         <div className="flex gap-2 pb-4 md:overflow-x-auto" data-testid="board">
           {STAGES.map((s) => (
-            <BoardColumn key={s} stage={s} cards={columns[s]} now={now} errors={errors} saving={saving} shownOnPhone={s === phoneStage} onMoveTo={setMoveTo} />
+            <BoardColumn key={s} stage={s} cards={columns[s]} rest={s === "in_service" ? inServiceRest : 0} now={now} errors={errors} saving={saving} shownOnPhone={s === phoneStage} onMoveTo={setMoveTo} />
           ))}
         </div>
         <DragOverlay>{active ? <div className="w-56 rounded-lg border border-accent bg-card p-2.5 text-sm font-semibold shadow-lg">{active.title}</div> : null}</DragOverlay>

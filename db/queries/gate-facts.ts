@@ -18,8 +18,13 @@ function idsQuery(set: ProjectSet): SQL {
   return "ids" in set ? sql`select unnest(${sql.param(set.ids)}::uuid[]) as id` : sql`select ${projects.id} as id from ${projects} where ${set.where}`;
 }
 
+/**
+ * `column` among the set's projects. A condition becomes `= any(array(…))`: the few ids are found
+ * first and the table is read through its project index, so the cost follows the set, not the
+ * table (a semi-join let PostgreSQL scan every project's rows).
+ */
 function inSet(column: SQLWrapper, set: ProjectSet): SQL {
-  return "ids" in set ? inArray(column as never, set.ids) : sql`${column} in (select ${projects.id} from ${projects} where ${set.where})`;
+  return "ids" in set ? inArray(column as never, set.ids) : sql`${column} = any(array(select ${projects.id} from ${projects} where ${set.where}))`;
 }
 
 export type FactRow = {
@@ -125,7 +130,8 @@ export async function loadCycleInputs(set: ProjectSet, conn: Conn = db()) {
           .select({
             projectId: projects.id,
             // The recorded start of the current cycle; older projects fall back to their last move into cycling.
-            at: sql<Date | null>`coalesce(${projects.cycleStartedAt}, (select max(se.at) from stage_events se where se.project_id = ${projects.id} and se.to_stage = 'cycling'))`.mapWith(
+            // Qualified by hand: drizzle writes a lone "id" here, which inside the subquery would mean stage_events.id.
+            at: sql<Date | null>`coalesce(${projects.cycleStartedAt}, (select max(se.at) from stage_events se where se.project_id = "projects"."id" and se.to_stage = 'cycling'))`.mapWith(
               (v: string | Date | null) => (v === null ? null : new Date(v)),
             ),
           })

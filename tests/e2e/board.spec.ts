@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import { expect, test } from "@playwright/test";
 import { eq } from "drizzle-orm";
 import { db } from "@/db";
-import { stageEvents } from "@/db/schema";
+import { projects, stageEvents } from "@/db/schema";
 import { PASSWORD, getProject, makeProject, makeUser } from "../support/fixtures";
 import { completeSurvey, recordLeakChecks } from "../integration/board-support";
 import { ready, signIn } from "../pages/sign-in-page";
@@ -127,4 +127,33 @@ test("the lead creates a project for a new client from the board", async ({ page
   const board = new BoardPage(page);
   await board.open(`?q=${tag}`);
   await board.expectIn(`${tag} conservatory tank`, "site_survey");
+});
+
+test("the in-service column counts the tanks it doesn't show and opens the full list", async ({ page }) => {
+  const tag = `Kept${randomUUID().slice(0, 6)}`;
+  const lead = await makeUser("lead", `Lead ${tag}`);
+  const crew = await makeUser("crew", `Crew ${tag}`);
+  const client = await makeUser("client", `Client ${tag}`);
+  const recent = await makeProject({ client, lead, crew: [crew], stage: "in_service", title: `${tag} just handed over` });
+  const old: { id: string; title: string }[] = [];
+  for (const [title, days] of [[`${tag} serviced since spring`, 200], [`${tag} serviced for years`, 1500]] as const) {
+    const p = await makeProject({ client, lead, crew: [crew], stage: "in_service", title });
+    await db().update(projects).set({ stageEnteredAt: new Date(Date.now() - days * 86_400_000) }).where(eq(projects.id, p.id));
+    old.push(p);
+  }
+
+  await signIn(page, crew.email, PASSWORD);
+  await expect(page).toHaveURL(/\/board$/);
+  const column = page.getByTestId("column-in_service");
+  await expect(column.getByTestId("in-service-count")).toHaveText("1 needing attention (handed over in the last 14 days or a service visit overdue); 2 more in service");
+  await expect(column.getByText(recent.title)).toBeVisible();
+  await expect(column.getByText(old[0].title)).toHaveCount(0);
+
+  await column.getByTestId("in-service-all").click();
+  await expect(page).toHaveURL(/\/board\/in-service$/);
+  await expect(page.getByTestId("in-service-total")).toContainText("3 tanks in service");
+  await expect(page.getByTestId("in-service-list").getByRole("link")).toHaveText([recent.title, old[0].title, old[1].title]);
+  await page.getByTestId("in-service-search").fill("for years");
+  await page.getByRole("button", { name: "Search" }).click();
+  await expect(page.getByTestId("in-service-list").getByRole("link")).toHaveText([old[1].title]);
 });

@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { DEMO, ready, signIn } from "../pages/sign-in-page";
+import { PASSWORD, makeUser } from "../support/fixtures";
 
 test("the lead lands on the board", async ({ page }) => {
   await signIn(page, DEMO.lead);
@@ -47,4 +48,15 @@ test("a client opening another client's project is refused", async ({ page }) =>
   await expect(page.getByRole("heading", { name: "Nothing here, or not for you" })).toBeVisible();
   await expect(page.getByText("Brandt lounge reef")).toHaveCount(0);
   await ready(page);
+});
+
+test("signing out ends the session and returns to the sign-in page", async ({ page }) => {
+  const crew = await makeUser("crew");
+  await signIn(page, crew.email, PASSWORD);
+  await expect(page).toHaveURL(/\/board$/);
+  await ready(page);
+  await page.getByRole("button", { name: "Sign out" }).first().click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  await page.goto("/board");
+  await expect(page).toHaveURL(/\/sign-in/);
 });

@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { userRoute } from "@/server/route";
+import { timedSync } from "@/server/timing";
 import { getBoard } from "@/db/queries/board";
 import { createProject } from "@/db/queries/project-create";
 import { projectCreateSchema } from "./project-create.schema";
@@ -8,7 +9,9 @@ export const dynamic = "force-dynamic";
 
 /** The board: every card the caller may see, with what blocks each card's next stage. */
 export const GET = userRoute({ roles: ["lead", "crew"] }, async ({ user }) => {
-  return NextResponse.json(await getBoard(user), { headers: { "cache-control": "no-store" } });
+  const board = await getBoard(user);
+  const body = timedSync("json", () => JSON.stringify(board));
+  return new NextResponse(body, { headers: { "content-type": "application/json", "cache-control": "no-store" } });
 });
 
 /** A new project at the end of the site-survey column (lead only). */

@@ -8,7 +8,8 @@ import { listStockingBatches } from "@/db/queries/stocking";
 import { canOnProject } from "@/lib/auth/permissions";
 import { EmptyState } from "@/components/ui/empty-state";
 import { CycleSummary } from "./_components/cycle-summary";
-import { CycleChart, type ChartPoint } from "./_components/cycle-chart";
+import type { ChartPoint } from "./_components/cycle-chart";
+import { CycleChartLazy } from "./_components/cycle-chart-lazy";
 import { ReadingsTable } from "./_components/readings-table";
 import { WaterTestForm } from "./_components/water-test-form";
 import { DosePanel } from "./_components/dose-panel";
@@ -85,7 +86,7 @@ export default async function WaterPage({ params }: { params: Promise<{ id: stri
           Ammonia, nitrite and nitrate
         </h2>
         {points.length ? (
-          <CycleChart points={points} today={today} />
+          <CycleChartLazy points={points} today={today} />
         ) : (
           <EmptyState title="No water tests yet — log the first one below.">
             The chart fills in as tests are logged: ammonia first, then nitrite, then nitrate as the bacteria establish.

@@ -3,7 +3,7 @@ import { format } from "date-fns";
 import { groupSentence, growthWords } from "@/lib/stocking/client-words";
 import { EmptyState } from "@/components/ui/empty-state";
 import { FishProblemForm } from "./fish-problem-form";
-import { GrowthChart } from "./growth-chart";
+import { GrowthChartLazy } from "./growth-chart-lazy";
 import type { LivestockProps } from "./livestock-views";
 
 /** The client's view of their fish: who lives in the tank, how they are growing, photos, and a way to tell us about a problem. */
@@ -29,7 +29,7 @@ export function ClientFish({ projectId, stage, record, photos }: { projectId: st
                   <p className="text-muted">
                     Here since {format(new Date(g.addedAt), "d MMM yyyy")}. {growth}
                   </p>
-                  {g.growth.length > 1 && <GrowthChart name={g.commonName} points={g.growth} />}
+                  {g.growth.length > 1 && <GrowthChartLazy name={g.commonName} points={g.growth} />}
                 </li>
               );
             })}

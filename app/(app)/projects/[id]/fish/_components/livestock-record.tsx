@@ -1,7 +1,7 @@
 import { format } from "date-fns";
 import { EVENT_LABELS } from "@/lib/stocking/census";
 import { EmptyState } from "@/components/ui/empty-state";
-import { GrowthChart } from "./growth-chart";
+import { GrowthChartLazy } from "./growth-chart-lazy";
 import type { LivestockProps } from "./livestock-views";
 
 const day = (iso: string) => format(new Date(iso), "d MMM yyyy");
@@ -65,7 +65,7 @@ export function LivestockRecord({ record }: { record: LivestockProps }) {
         .map((g) => (
           <div key={g.id}>
             <h3 className="text-sm font-semibold">Growth: {g.commonName}</h3>
-            <GrowthChart name={g.commonName} points={g.growth} />
+            <GrowthChartLazy name={g.commonName} points={g.growth} />
           </div>
         ))}
       <div>

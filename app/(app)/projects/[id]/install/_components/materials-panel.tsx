@@ -1,7 +1,6 @@
 "use client";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { useForm, type Resolver } from "react-hook-form";
 import { format } from "date-fns";
 import { sendJson } from "@/lib/http/send-json";
 import { substrateQuantity } from "@/lib/tank/materials";
@@ -9,7 +8,16 @@ import { SUBSTRATE_PROPERTIES } from "@/lib/tank/densities";
 import { fromDisplay, toDisplay, unitLabel, type UnitSystem } from "@/lib/tank/units";
 import { Field } from "@/components/ui/field";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
-import { newMaterialSchema, type NewMaterial } from "@/app/api/projects/[id]/materials/material.schema";
+import type { NewMaterial } from "@/app/api/projects/[id]/materials/material.schema";
+
+/**
+ * The van-list form's checks (its zod schema, and zod with it) load when the form is first checked,
+ * not with install day: the page is opened on a phone on site, often on a poor connection.
+ */
+const materialResolver: Resolver<NewMaterial> = async (values, context, options) => {
+  const [{ zodResolver }, { newMaterialSchema }] = await Promise.all([import("@hookform/resolvers/zod"), import("@/app/api/projects/[id]/materials/material.schema")]);
+  return (zodResolver(newMaterialSchema) as unknown as Resolver<NewMaterial>)(values, context, options);
+};
 
 type Material = { id: string; label: string; quantity: number; unit: string; loadedAt: string | null; loadedByName: string | null };
 type Prefill = { lengthMm: number | null; widthMm: number | null; note: string | null; substrate: string | null; depthMm: number | null; rockMassKg: number | null };
@@ -40,7 +48,7 @@ export function MaterialsPanel({ projectId, units, initial, prefill }: { project
   const rockKg = fromDisplay("mass", n(rockIn), units);
   const q = valid ? substrateQuantity({ footprintLengthMm: l, footprintWidthMm: w, depthMm: d, bulkDensityKgM3: SUBSTRATE_PROPERTIES[kind].bulkDensityKgM3, bagSizeKg: bag }) : null;
 
-  const { register, handleSubmit, formState, reset, setError: setFieldError } = useForm<NewMaterial>({ resolver: zodResolver(newMaterialSchema), defaultValues: { label: "", unit: "" } });
+  const { register, handleSubmit, formState, reset, setError: setFieldError } = useForm<NewMaterial>({ resolver: materialResolver, defaultValues: { label: "", unit: "" } });
 
   async function add(values: NewMaterial) {
     setError(null);
