@@ -1,6 +1,7 @@
 "use client";
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { usePathname } from "next/navigation";
+import { buttonStyles } from "@/components/ui/button-styles";
 import { SW_MESSAGES, isOfflinePage, isShellAsset, savedCopyNotice } from "@/lib/offline/offline-pages";
 
 /** Asks the service worker something and waits briefly for the answer. */
@@ -27,6 +28,8 @@ export function OfflineSetup() {
   const [savedAt, setSavedAt] = useState<number | null>(null);
   const [online, setOnline] = useState(true);
   const [loadedAt] = useState(() => Date.now());
+  const [stale, setStale] = useState(false);
+  const savedRef = useRef<number | null>(null);
 
   useEffect(() => {
     if (!("serviceWorker" in navigator) || process.env.NODE_ENV === "production") return;
@@ -41,7 +44,10 @@ export function OfflineSetup() {
       const controller = navigator.serviceWorker.controller;
       if (controller) {
         const answer = await ask<{ savedAt: number | null }>(controller, { type: SW_MESSAGES.savedAt });
-        if (live && answer?.savedAt) setSavedAt(answer.savedAt);
+        if (live && answer?.savedAt) {
+          savedRef.current = answer.savedAt;
+          setSavedAt(answer.savedAt);
+        }
       }
       try {
         await navigator.serviceWorker.register("/sw.js", { scope: "/" });
@@ -73,19 +79,41 @@ export function OfflineSetup() {
 
   useEffect(() => {
     const update = () => setOnline(navigator.onLine);
+    const back = () => {
+      // A saved copy shown earlier is now known to be old; say so instead of "no signal".
+      if (savedRef.current) {
+        savedRef.current = null;
+        setSavedAt(null);
+        setStale(true);
+      }
+      update();
+    };
     update();
-    window.addEventListener("online", update);
+    window.addEventListener("online", back);
     window.addEventListener("offline", update);
     return () => {
-      window.removeEventListener("online", update);
+      window.removeEventListener("online", back);
       window.removeEventListener("offline", update);
     };
   }, []);
 
-  if (!offlinePage || (online && !savedAt)) return null;
-  return (
-    <p role="status" data-testid="saved-copy" className="mb-4 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm font-medium text-ink">
-      {savedCopyNotice(new Date(savedAt ?? loadedAt))}
-    </p>
-  );
+  if (!offlinePage) return null;
+  if (!online || savedAt) {
+    return (
+      <p role="status" data-testid="saved-copy" className="mb-4 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm font-medium text-ink">
+        {savedCopyNotice(new Date(savedAt ?? loadedAt))}
+      </p>
+    );
+  }
+  if (stale) {
+    return (
+      <p role="status" data-testid="back-online" className="mb-4 flex flex-wrap items-center gap-3 rounded-xl border border-line bg-card px-4 py-3 text-sm">
+        Back online. This page is the saved copy; reload it to see the latest.
+        <button type="button" className={`${buttonStyles.secondary} min-h-11`} onClick={() => location.reload()}>
+          Reload
+        </button>
+      </p>
+    );
+  }
+  return null;
 }

@@ -62,9 +62,9 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
           ["#stage-stand_load_check", "Stand & load"],
           ["#stage-aquascape", "Aquascape"],
           ["#stage-fill_leak_test", "Fill checklist"],
+          ["#photos-heading", "Photos"],
           ["#materials-heading", "Materials"],
           ["#fill-heading", "Fill & leak test"],
-          ["#photos-heading", "Photos"],
         ].map(([href, label]) => (
           <a key={href} href={href} className="inline-flex min-h-11 items-center rounded-full border border-line bg-card px-3 font-medium hover:bg-paper">
             {label}
