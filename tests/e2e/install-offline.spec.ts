@@ -8,7 +8,8 @@ import { makeTeam, PASSWORD } from "../support/fixtures";
 import { ready, signIn } from "../pages/sign-in-page";
 
 // A phone, with the service worker on (it is what keeps the page for a basement without signal).
-test.use({ viewport: { width: 390, height: 844 }, trace: "off", serviceWorkers: "allow" });
+// The phone's clock reads UTC, so a camera time without a zone is read as UTC.
+test.use({ viewport: { width: 390, height: 844 }, trace: "off", serviceWorkers: "allow", timezoneId: "UTC" });
 
 /** A 160 × 120 HEIC photo made with libheif's heif-enc, as an iPhone sends it. */
 const HEIC = readFileSync(new URL("../fixtures/tank-160x120.heic", import.meta.url));
@@ -47,7 +48,10 @@ test("install day on a phone: HEIC and JPEG photos, a photo taken without signal
 
   // No signal: the photo waits on the phone.
   await context.setOffline(true);
-  const small = await sharp({ create: { width: 200, height: 150, channels: 3, background: "#8a6d3b" } }).jpeg().toBuffer();
+  const small = await sharp({ create: { width: 200, height: 150, channels: 3, background: "#8a6d3b" } })
+    .withExif({ IFD2: { DateTimeOriginal: "2026:11:30 09:15:00" } })
+    .jpeg()
+    .toBuffer();
   await picker.setInputFiles({ name: "sump offline.jpg", mimeType: "image/jpeg", buffer: small });
   await expect(photos.locator('[data-testid="photo"][data-state="waiting"]')).toHaveCount(1);
   await expect(photos.getByTestId("waiting-photos")).toContainText("Waiting to send — 1 photo");
@@ -74,6 +78,8 @@ test("install day on a phone: HEIC and JPEG photos, a photo taken without signal
   expect(offline).toHaveLength(1);
   expect(offline[0].clientKey).toMatch(/^p-[0-9a-f]{32}$/);
   expect(offline[0].status).toBe("ready");
+  // The camera's time came with it, though the shrunk copy carries no metadata.
+  expect(offline[0].takenAt?.toISOString()).toBe("2026-11-30T09:15:00.000Z");
 
   // Signing out forgets the saved pages, so the next person on this phone can't open them offline.
   await page.getByRole("button", { name: "Sign out" }).first().click();
