@@ -23,5 +23,5 @@ export default defineConfig([
     files: ["tests/**"],
     rules: { "@typescript-eslint/no-explicit-any": "off" },
   },
-  globalIgnores([".next/**", ".next-*/**", ".data/**", "node_modules/**", "next-env.d.ts", "db/migrations/**", "test-results/**", "playwright-report/**", "backups/**"]),
+  globalIgnores([".next/**", ".next-*/**", ".data/**", "node_modules/**", "next-env.d.ts", "db/migrations/**", "test-results/**", "playwright-report/**", "backups/**", "public/sw.js"]),
 ]);

@@ -5,7 +5,7 @@ const nextConfig: NextConfig = {
   // The test run builds into its own folder so it never clashes with a running dev or demo server.
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
   poweredByHeader: false,
-  serverExternalPackages: ["pg", "sharp", "bcryptjs", "nodemailer", "graphile-worker", "rate-limiter-flexible"],
+  serverExternalPackages: ["pg", "sharp", "heic-decode", "libheif-js", "bcryptjs", "nodemailer", "graphile-worker", "rate-limiter-flexible"],
   // Types are checked once, for the whole repository, by `tsc` in the test run.
   typescript: { ignoreBuildErrors: true },
   // Pages get their nonce-based policy and HSTS from proxy.ts; these apply to every response.

@@ -33,6 +33,7 @@ export APP_URL=http://127.0.0.1:$PORT NEXTAUTH_URL=http://127.0.0.1:$PORT BENCH_
 
 if [ -z "${BENCH_SKIP_BUILD:-}" ] || [ ! -f "$DIST/BUILD_ID" ]; then
   echo "== build ($DIST)"
+  node scripts/build-sw.mjs
   NEXT_DIST_DIR=$DIST node node_modules/next/dist/bin/next build >.data/bench-build.log 2>&1 || {
     tail -40 .data/bench-build.log
     exit 1

@@ -36,6 +36,7 @@ CHILD_PIDS+=($!)
 if [ "$mode" = dev ]; then
   node node_modules/next/dist/bin/next dev -p "$PORT" &
 else
+  node scripts/build-sw.mjs
   node node_modules/next/dist/bin/next build
   node node_modules/next/dist/bin/next start -p "$PORT" &
 fi

@@ -47,6 +47,7 @@ ensure_node_modules
 if [ -z "${SKIP_TYPES:-}" ]; then
   echo "== types"
   node node_modules/typescript/bin/tsc --noEmit
+  node node_modules/typescript/bin/tsc --noEmit -p sw/tsconfig.json
 fi
 
 if [ "$want_unit" = 1 ] && [ -z "${SKIP_LINT:-}" ]; then
@@ -86,6 +87,7 @@ export TEST_PAYMENTS_URL=$PAYMENTS_API_URL
 
 if [ -z "${SKIP_BUILD:-}" ] || [ ! -f "$DIST/BUILD_ID" ]; then
   echo "== build"
+  node scripts/build-sw.mjs
   NEXT_DIST_DIR=$DIST node node_modules/next/dist/bin/next build >".data/test-build-$slot.log" 2>&1 || {
     tail -50 ".data/test-build-$slot.log"
     exit 1

@@ -9,6 +9,7 @@ import { NavLinks } from "@/components/shell/nav-links";
 import { unreadClientMessages } from "@/db/queries/message-reads";
 import { NavMenu } from "@/components/shell/nav-menu";
 import { SignOutButton } from "@/components/shell/sign-out-button";
+import { OfflineSetup } from "@/components/offline/offline-setup";
 
 export default async function AppLayout({ children }: { children: ReactNode }) {
   const user = await requirePageUser();
@@ -35,7 +36,10 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-[1600px] flex-1 px-4 py-6">{children}</main>
+      <main className="mx-auto w-full max-w-[1600px] flex-1 px-4 py-6">
+        <OfflineSetup />
+        {children}
+      </main>
     </div>
   );
 }

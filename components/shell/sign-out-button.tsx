@@ -1,5 +1,6 @@
 "use client";
 import { useState } from "react";
+import { forgetSavedPages } from "@/components/offline/saved-pages";
 
 /**
  * Signs out through next-auth's own endpoint (CSRF token, then the sign-out POST), which ends every
@@ -28,10 +29,13 @@ export function SignOutButton() {
       disabled={busy}
       onClick={() => {
         setBusy(true);
-        signOut("/sign-in").catch(() => {
-          setBusy(false);
-          window.location.href = "/sign-in";
-        });
+        // Pages kept for working without a signal are this person's: they go before the session does.
+        forgetSavedPages()
+          .then(() => signOut("/sign-in"))
+          .catch(() => {
+            setBusy(false);
+            window.location.href = "/sign-in";
+          });
       }}
       className="whitespace-nowrap text-sm font-medium text-muted hover:text-ink"
     >

@@ -1,7 +1,7 @@
 "use client";
 import { useId, useRef, useState } from "react";
 import { buttonStyles } from "./button-styles";
-import { checkUpload } from "@/lib/install/upload-rules";
+import { PHOTO_ACCEPT, checkUpload } from "@/lib/install/upload-rules";
 
 export type UploadedFile = { id: string; fileName: string; url: string; thumbUrl: string | null };
 
@@ -67,7 +67,7 @@ export function UploadButton({ projectId, stage, label = "Attach a photo", capti
         type="file"
         className="sr-only"
         disabled={busy}
-        accept={photoOnly ? "image/jpeg,image/png,image/webp" : "image/jpeg,image/png,image/webp,application/pdf"}
+        accept={photoOnly ? PHOTO_ACCEPT : `${PHOTO_ACCEPT},application/pdf`}
         aria-describedby={error ? `${id}-error` : undefined}
         onChange={(e) => {
           const f = e.target.files?.[0];

@@ -18,12 +18,26 @@ export async function createPendingAttachment(input: {
   uploadedBy: string;
   status?: "pending" | "ready";
   thumbKey?: string | null;
-}): Promise<AttachmentRow> {
+  clientKey?: string | null;
+  takenAt?: Date | null;
+}): Promise<AttachmentRow | null> {
+  // A second upload under the same device key inserts nothing; the caller then returns the first.
   const [row] = await db()
     .insert(attachments)
-    .values({ ...input, status: input.status ?? "pending", thumbKey: input.thumbKey ?? null })
+    .values({ ...input, status: input.status ?? "pending", thumbKey: input.thumbKey ?? null, clientKey: input.clientKey ?? null, takenAt: input.takenAt ?? null })
+    .onConflictDoNothing({ target: [attachments.uploadedBy, attachments.clientKey] })
     .returning();
-  return row;
+  return row ?? null;
+}
+
+/** The upload a person already made under a device key, if any. */
+export async function findAttachmentByClientKey(uploadedBy: string, clientKey: string): Promise<AttachmentRow | null> {
+  const [row] = await db()
+    .select()
+    .from(attachments)
+    .where(and(eq(attachments.uploadedBy, uploadedBy), eq(attachments.clientKey, clientKey)))
+    .limit(1);
+  return row ?? null;
 }
 
 export async function getAttachment(id: string): Promise<AttachmentRow | null> {
@@ -31,9 +45,16 @@ export async function getAttachment(id: string): Promise<AttachmentRow | null> {
   return row ?? null;
 }
 
-/** `sizeBytes` is the stored file's size, which re-encoding a photo changes. */
-export async function markAttachmentReady(id: string, thumbKey: string | null, sizeBytes: number): Promise<AttachmentRow> {
-  const [row] = await db().update(attachments).set({ status: "ready", thumbKey, sizeBytes }).where(eq(attachments.id, id)).returning();
+/**
+ * `sizeBytes` is the stored file's size, which re-encoding a photo changes; a converted HEIC photo
+ * also changes its type and name.
+ */
+export async function markAttachmentReady(id: string, thumbKey: string | null, sizeBytes: number, stored?: { contentType: string; fileName: string }): Promise<AttachmentRow> {
+  const [row] = await db()
+    .update(attachments)
+    .set({ status: "ready", thumbKey, sizeBytes, ...(stored ?? {}) })
+    .where(eq(attachments.id, id))
+    .returning();
   return row;
 }
 

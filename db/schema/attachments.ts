@@ -1,4 +1,4 @@
-import { bigint, boolean, index, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { bigint, boolean, index, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { stageEnum } from "./enums";
 import { projects } from "./projects";
 import { users } from "./users";
@@ -25,9 +25,16 @@ export const attachments = pgTable(
       .notNull()
       .references(() => users.id),
     uploadedAt: timestamp("uploaded_at", { withTimezone: true }).notNull().defaultNow(),
+    /** When the photo was taken, from the camera's own record, where the device sent it. */
+    takenAt: timestamp("taken_at", { withTimezone: true }),
+    /**
+     * The device's key for one photo: a retry after a lost answer finds the first upload instead of
+     * making a second. Unique per uploader.
+     */
+    clientKey: text("client_key"),
     voidedAt: timestamp("voided_at", { withTimezone: true }),
     voidedBy: uuid("voided_by").references(() => users.id),
     voidReason: text("void_reason"),
   },
-  (t) => [index("attachments_project_idx").on(t.projectId, t.stage)],
+  (t) => [index("attachments_project_idx").on(t.projectId, t.stage), uniqueIndex("attachments_client_key_idx").on(t.uploadedBy, t.clientKey)],
 );

@@ -7,6 +7,8 @@ export const UPLOAD_TYPES = {
   "image/jpeg": { label: "JPEG photo", image: true },
   "image/png": { label: "PNG image", image: true },
   "image/webp": { label: "WebP image", image: true },
+  // An iPhone's default. Never stored as such: the server converts it and keeps a JPEG.
+  "image/heic": { label: "HEIC photo", image: true },
   "application/pdf": { label: "PDF document", image: false },
 } as const;
 
@@ -24,12 +26,34 @@ export function isImageType(value: string): boolean {
   return isUploadType(value) && UPLOAD_TYPES[value].image;
 }
 
-/** The sentence shown when a type is refused; HEIC gets its own advice because phones default to it. */
-export function typeRefusal(contentType: string): string {
-  if (/hei[cf]/i.test(contentType)) {
-    return "HEIC photos can't be previewed here. Set the phone's camera to its most compatible format (JPEG), or share the photo as JPEG, and try again.";
-  }
-  return "Only JPEG, PNG or WebP photos and PDF documents can be uploaded.";
+/** The sentence shown when a type is refused. */
+export function typeRefusal(_contentType: string): string {
+  return "Only JPEG, PNG, WebP or HEIC photos and PDF documents can be uploaded.";
+}
+
+/** What the `accept` attribute of a file picker offers. */
+export const PHOTO_ACCEPT = "image/jpeg,image/png,image/webp,image/heic,image/heif,.heic,.heif";
+
+const HEIF_DECLARED = /^image\/hei[cf](-sequence)?$/;
+const HEIF_NAME = /\.hei[cf]$/i;
+const UNTYPED = new Set(["", "application/octet-stream"]);
+
+/**
+ * The type a file is taken to claim. Phones label HEIC photos image/heic, image/heif, or nothing at
+ * all (then only the name says so); all of these are taken as one HEIC claim, which the bytes must
+ * then bear out. Other types are taken as declared.
+ */
+export function claimedType(contentType: string, fileName: string): string {
+  const declared = contentType.toLowerCase().split(";")[0].trim();
+  if (HEIF_DECLARED.test(declared)) return "image/heic";
+  if (UNTYPED.has(declared) && HEIF_NAME.test(fileName)) return "image/heic";
+  return declared;
+}
+
+/** A converted HEIC photo keeps its name with a .jpg ending, so a download opens anywhere. */
+export function convertedFileName(name: string): string {
+  const base = name.replace(HEIF_NAME, "");
+  return `${base || "photo"}.jpg`;
 }
 
 export function sizeRefusal(sizeBytes: number): string | null {
@@ -68,6 +92,18 @@ export function sanitiseFileName(raw: string): NameCheck {
   return { ok: true, name };
 }
 
+/**
+ * HEIF brands a still photo from a phone or camera carries as its major brand (ISO/IEC 23008-12
+ * annex; the list libheif and file-type recognise). An ISO box file begins with a box size, then "ftyp".
+ */
+export const HEIF_BRANDS = new Set(["heic", "heix", "heim", "heis", "hevc", "hevx", "mif1", "msf1", "heif"]);
+
+export function isHeifHead(head: Uint8Array): boolean {
+  if (head.byteLength < 12) return false;
+  const text = (from: number) => String.fromCharCode(head[from], head[from + 1], head[from + 2], head[from + 3]);
+  return text(4) === "ftyp" && HEIF_BRANDS.has(text(8));
+}
+
 /** The type the file's first bytes show, from each format's signature; null when none matches. */
 export function sniffType(head: Uint8Array): UploadType | null {
   const at = (i: number, bytes: number[]) => bytes.every((b, k) => head[i + k] === b);
@@ -75,6 +111,7 @@ export function sniffType(head: Uint8Array): UploadType | null {
   if (at(0, [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) return "image/png";
   if (at(0, [0x52, 0x49, 0x46, 0x46]) && at(8, [0x57, 0x45, 0x42, 0x50])) return "image/webp";
   if (at(0, [0x25, 0x50, 0x44, 0x46, 0x2d])) return "application/pdf";
+  if (isHeifHead(head)) return "image/heic";
   return null;
 }
 
@@ -82,7 +119,7 @@ export type UploadMeta = { fileName: string; contentType: string; sizeBytes: num
 
 /** Checks a proposed upload; on failure, the field and the sentence to show. */
 export function checkUpload(meta: UploadMeta): { ok: true; fileName: string; contentType: UploadType } | { ok: false; field: keyof UploadMeta; message: string } {
-  const contentType = meta.contentType.toLowerCase().split(";")[0].trim();
+  const contentType = claimedType(meta.contentType, meta.fileName);
   if (!isUploadType(contentType)) return { ok: false, field: "contentType", message: typeRefusal(contentType) };
   const size = sizeRefusal(meta.sizeBytes);
   if (size) return { ok: false, field: "sizeBytes", message: size };

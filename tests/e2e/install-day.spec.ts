@@ -7,7 +7,9 @@ import { makeTeam, PASSWORD } from "../support/fixtures";
 import { ready, signIn } from "../pages/sign-in-page";
 
 // Traces off: several runs share test-results/, and another run clearing it fails the trace write.
-test.use({ viewport: { width: 390, height: 844 }, trace: "off" });
+// No service worker here: these tests drop the connection with page.route, which a worker would bypass
+// (install-offline.spec.ts covers the worker).
+test.use({ viewport: { width: 390, height: 844 }, trace: "off", serviceWorkers: "block" });
 
 const item = (page: Page, label: string) => page.locator(`[data-testid="checklist-item"][data-item="${label}"]`);
 

@@ -4,6 +4,7 @@ import { projectSectionTitle, requirePageProject } from "@/server/page-project";
 import { listChecklistItems, listProjectTicks } from "@/db/queries/checklists";
 import { getDesignData, getUnitSystem, listMaterials } from "@/db/queries/materials";
 import { listLeakChecks } from "@/db/queries/leak-checks";
+import { listProjectAttachments } from "@/db/queries/attachments";
 import { latestTicks } from "@/lib/install/checklist-progress";
 import { bedFootprintFromDesign, looksLikeDesign } from "@/lib/install/install-calcs";
 import { computeLoad } from "@/lib/tank/load";
@@ -13,6 +14,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { ChecklistDay } from "./_components/checklist-day";
 import { MaterialsPanel } from "./_components/materials-panel";
 import { FillPanel } from "./_components/fill-panel";
+import { DayPhotos } from "./_components/day-photos";
 import type { DayState } from "./_components/checklist-types";
 
 export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Install day");
@@ -33,14 +35,18 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
   const { id } = await params;
   const user = await requirePageUser("lead", "crew");
   const { project } = await requirePageProject(id, user, "tick_checklist");
-  const [items, ticks, mats, checks, design, units] = await Promise.all([
+  const [items, ticks, mats, checks, design, units, files] = await Promise.all([
     listChecklistItems(),
     listProjectTicks(project.id),
     listMaterials(project.id),
     listLeakChecks(project.id),
     getDesignData(project.id),
     getUnitSystem(user.id),
+    listProjectAttachments(project.id),
   ]);
+  const dayPhotos = files
+    .filter((f) => DAY_STAGES.includes(f.stage) && f.contentType.startsWith("image/"))
+    .map((f) => ({ id: f.id, fileName: f.fileName, caption: f.caption, url: `/api/attachments/${f.id}?variant=full`, thumbUrl: f.thumbKey ? `/api/attachments/${f.id}?variant=thumb` : null }));
   const dayItems = items.filter((i) => DAY_STAGES.includes(i.stage));
   const initial: Record<string, DayState> = {};
   for (const [itemId, t] of latestTicks(ticks)) {
@@ -56,6 +62,7 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
           ["#stage-stand_load_check", "Stand & load"],
           ["#stage-aquascape", "Aquascape"],
           ["#stage-fill_leak_test", "Fill checklist"],
+          ["#photos-heading", "Photos"],
           ["#materials-heading", "Materials"],
           ["#fill-heading", "Fill & leak test"],
         ].map(([href, label]) => (
@@ -80,6 +87,13 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
       ) : (
         <EmptyState title="No checklist items yet">The lead adds them on the Checklists page.</EmptyState>
       )}
+      <DayPhotos
+        projectId={project.id}
+        userId={user.id}
+        stages={DAY_STAGES}
+        defaultStage={DAY_STAGES.includes(project.stage) ? project.stage : "aquascape"}
+        initial={dayPhotos}
+      />
       <div className="grid items-start gap-8 lg:grid-cols-2">
       <MaterialsPanel
         projectId={project.id}

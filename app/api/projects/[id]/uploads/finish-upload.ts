@@ -5,6 +5,7 @@ import { MAX_UPLOAD_PIXELS, checkUpload, isImageType, pdfRefusal, pixelRefusal, 
 import { badRequest, unprocessable } from "@/server/errors";
 import { putObject } from "@/server/storage";
 import type { UploadBody } from "./upload.schema";
+import { heicToJpeg } from "./heic";
 
 /** Keys say which project a file belongs to and nothing else guessable. */
 export function newObjectKey(projectId: string): string {
@@ -22,7 +23,11 @@ export function vetUpload(input: UploadBody) {
 export function vetBytes(bytes: Uint8Array, claimed: string) {
   const actual = sniffType(bytes.subarray(0, 16));
   if (actual !== claimed) {
-    throw unprocessable("The file's contents don't match its type. Upload the original photo or PDF, not a renamed file.");
+    throw unprocessable(
+      claimed === "image/heic"
+        ? "That file is called a HEIC photo but isn't one. Upload the photo straight from the camera, or share it as JPEG."
+        : "The file's contents don't match its type. Upload the original photo or PDF, not a renamed file.",
+    );
   }
 }
 
@@ -32,14 +37,16 @@ const DAMAGED = "The photo couldn't be read; it may be damaged. Take it again or
  * The bytes to store. The first bytes must match the type; a PDF must look like a whole PDF and
  * not a web page behind a PDF header; a photo's size in pixels is read from its header before
  * anything is decoded, then the photo is re-encoded, which drops whatever was appended after the
- * image (such as HTML) and the metadata (a phone's location among it).
+ * image (such as HTML) and the metadata (a phone's location among it). A HEIC photo is decoded
+ * and stored as a JPEG, so the answer says which type was stored.
  */
-export async function prepareFile(bytes: Uint8Array, claimed: string): Promise<Uint8Array> {
+export async function prepareFile(bytes: Uint8Array, claimed: string): Promise<{ bytes: Uint8Array; contentType: string }> {
   vetBytes(bytes, claimed);
+  if (claimed === "image/heic") return { bytes: await heicToJpeg(bytes), contentType: "image/jpeg" };
   if (!isImageType(claimed)) {
     const refusal = pdfRefusal(bytes);
     if (refusal) throw unprocessable(refusal);
-    return bytes;
+    return { bytes, contentType: claimed };
   }
   let meta: Metadata;
   try {
@@ -53,7 +60,7 @@ export async function prepareFile(bytes: Uint8Array, claimed: string): Promise<U
     const image = sharp(bytes, { limitInputPixels: MAX_UPLOAD_PIXELS }).rotate();
     const out =
       claimed === "image/png" ? image.png({ compressionLevel: 9 }) : claimed === "image/webp" ? image.webp({ quality: 90 }) : image.jpeg({ quality: 90 });
-    return new Uint8Array(await out.toBuffer());
+    return { bytes: new Uint8Array(await out.toBuffer()), contentType: claimed };
   } catch {
     throw unprocessable(DAMAGED);
   }

@@ -4,6 +4,7 @@ import { canOnProject } from "@/lib/auth/permissions";
 import { getAttachment, markAttachmentReady } from "@/db/queries/attachments";
 import { conflict, notFound, unprocessable } from "@/server/errors";
 import { deleteObject, getObjectBytes, headObject, putObject } from "@/server/storage";
+import { convertedFileName } from "@/lib/install/upload-rules";
 import { prepareFile, storeThumbnail } from "../../finish-upload";
 
 /**
@@ -21,15 +22,17 @@ export const POST = projectRoute<undefined, undefined, { id: string; attachmentI
     await deleteObject(a.key);
     throw unprocessable(`The file that arrived is ${head.size} bytes, not the ${a.sizeBytes} bytes announced. Upload it again.`);
   }
-  let bytes: Uint8Array;
+  let prepared: { bytes: Uint8Array; contentType: string };
   try {
-    bytes = await prepareFile(await getObjectBytes(a.key), a.contentType);
+    prepared = await prepareFile(await getObjectBytes(a.key), a.contentType);
   } catch (error) {
     await deleteObject(a.key);
     throw error;
   }
-  await putObject(a.key, bytes, a.contentType);
-  const thumbKey = await storeThumbnail(a.key, bytes, a.contentType);
-  const ready = await markAttachmentReady(a.id, thumbKey, bytes.byteLength);
+  const { bytes, contentType } = prepared;
+  await putObject(a.key, bytes, contentType);
+  const thumbKey = await storeThumbnail(a.key, bytes, contentType);
+  const fileName = contentType === a.contentType ? a.fileName : convertedFileName(a.fileName);
+  const ready = await markAttachmentReady(a.id, thumbKey, bytes.byteLength, { contentType, fileName });
   return NextResponse.json({ id: ready.id, status: ready.status, url: `/api/attachments/${ready.id}?variant=full`, thumbUrl: thumbKey ? `/api/attachments/${ready.id}?variant=thumb` : null });
 });
