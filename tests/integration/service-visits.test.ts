@@ -194,6 +194,20 @@ describe("visit reports", () => {
     expect(mail[0].text).toContain("All clear and bright.");
     expect(mail[0].text).toContain("Glass cleaned");
     expect(mail[0].text).not.toContain("hose tap");
+
+    // The pages say the same: the client reads the report and the plan, never the internal note.
+    const clientReport = await client.get(`/projects/${t.project.id}/service/visits/${visitId}`);
+    expect(clientReport.status).toBe(200);
+    expect(clientReport.text).toContain("All clear and bright.");
+    expect(clientReport.text).not.toContain("hose tap");
+    const clientTab = await client.get(`/projects/${t.project.id}/service`);
+    expect(clientTab.status).toBe(200);
+    expect(clientTab.text).toContain("Every Wednesday");
+    expect(clientTab.text).toContain("Glass cleaned");
+    expect(clientTab.text).not.toContain("Save the plan");
+    const leadReport = await lead.get(`/projects/${t.project.id}/service/visits/${visitId}`);
+    expect(leadReport.text).toContain("hose tap");
+    expect((await (await signedIn(t.otherCrew)).get(`/projects/${t.project.id}/service`)).status).toBe(404);
   });
 
   it("a client who turned visit reports off gets no e-mail, but the report still shows", async () => {

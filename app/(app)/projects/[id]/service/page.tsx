@@ -41,9 +41,9 @@ export default async function ServicePage({ params }: { params: Promise<{ id: st
         {plan && recurrence ? (
           <div className="mt-2 flex flex-col gap-1 text-sm">
             <p>
-              {describeRecurrence(recurrence)} at {plan.startTime} ({tz}), from {plan.startsOn}; about {plan.durationMinutes} minutes.
+              {`${describeRecurrence(recurrence)} at ${plan.startTime} (${tz}), from ${plan.startsOn}; about ${plan.durationMinutes} minutes.`}
             </p>
-            <p>Water change: {plan.waterChangePercent} % of the tank&apos;s water at each visit.</p>
+            <p>{`Water change: ${plan.waterChangePercent} % of the tank's water at each visit.`}</p>
             {plan.tasks.length > 0 && (
               <>
                 <p>A routine visit includes:</p>
