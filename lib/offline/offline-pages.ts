@@ -9,7 +9,7 @@
  */
 export const OFFLINE_PAGES: RegExp[] = [
   /^\/projects\/[^/]+\/install\/?$/,
-  // /^\/projects\/[^/]+\/service(\/.*)?$/, (service visits, when those pages exist)
+  /^\/projects\/[^/]+\/service\/visits\/[^/]+\/?$/,
 ];
 
 export function isOfflinePage(pathname: string): boolean {

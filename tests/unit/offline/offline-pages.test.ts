@@ -6,6 +6,11 @@ describe("pages kept for offline use", () => {
     expect(isOfflinePage("/projects/2b1f0c1e-7c1d-4a35-9d55-0d3f2c1a9e10/install")).toBe(true);
     expect(isOfflinePage("/projects/abc/install/")).toBe(true);
   });
+  it("keeps a service visit's report page", () => {
+    expect(isOfflinePage("/projects/abc/service/visits/2b1f0c1e-7c1d-4a35-9d55-0d3f2c1a9e10")).toBe(true);
+    expect(isOfflinePage("/projects/abc/service")).toBe(false);
+    expect(isOfflinePage("/projects/abc/service/visits/x/extra")).toBe(false);
+  });
   it("keeps no other page, and no API answer", () => {
     for (const path of ["/board", "/projects/abc", "/projects/abc/photos", "/projects/abc/install/extra", "/api/projects/abc/install", "/portal", "/projects//install"]) {
       expect(isOfflinePage(path)).toBe(false);
