@@ -66,7 +66,7 @@ export async function addStockingBatch(opts: {
   projectId: string;
   /** `canOverride` comes from the permission table (canOnProject "override_gate"). */
   user: { id: string; canOverride: boolean };
-  values: { addedAt: Date; description: string; fishCount: number; quarantineDays: number | null; overrideReason: string | null };
+  values: { addedAt: Date; description: string; fishCount: number; quarantineDays: number | null; overrideReason: string | null; quarantineWaived?: boolean };
   now?: Date;
   /** Run inside the caller's transaction (a plan batch leaving quarantine records its batch this way). */
   tx?: Tx;
@@ -109,9 +109,9 @@ export async function addStockingBatch(opts: {
         quarantineDays: values.quarantineDays,
         byUserId: user.id,
         // A reason given when no rule was in the way is not an override; don't record it as one.
-        override: reasons.length ? values.overrideReason : null,
+        override: reasons.length || values.quarantineWaived ? values.overrideReason : null,
       })
       .returning();
-    return { batch: row, overridden: reasons.length > 0, passedReasons: reasons };
+    return { batch: row, overridden: reasons.length > 0 || !!values.quarantineWaived, passedReasons: reasons };
   });
 }

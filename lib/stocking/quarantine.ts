@@ -25,3 +25,15 @@ export function quarantineVerdict(opts: { startedAt: Date | null; days: number; 
   if (left === 0) return { done: true, reason: null };
   return { done: false, reason: `Quarantine runs ${opts.days} days; ${left} ${left === 1 ? "day is" : "days are"} left.` };
 }
+
+/**
+ * Fish recorded straight into the display (not through a holding tank in the plan) must have had the
+ * company's full quarantine elsewhere, or carry the lead's written reason why not.
+ */
+export function directBatchQuarantineReason(opts: { days: number | null; requiredDays: number; override: string | null }): string | null {
+  if (opts.override) return null;
+  const had = opts.days ?? 0;
+  if (had >= opts.requiredDays) return null;
+  const hadWords = opts.days == null ? "no quarantine recorded" : `${had} ${had === 1 ? "day" : "days"} of quarantine`;
+  return `New fish are quarantined for ${opts.requiredDays} days before the display; this batch had ${hadWords}. Put it in a holding tank through the stocking plan, or the lead records why it can go in now.`;
+}

@@ -6,7 +6,7 @@ import { makeTeam } from "../support/fixtures";
 import { signedIn } from "../support/http";
 import { hoursAgo, insertReadings, nearlyCycled } from "./water-support";
 
-const batch = (over: Record<string, unknown> = {}) => ({ description: "Six small tetras after quarantine", fishCount: 6, quarantineDays: 14, ...over });
+const batch = (over: Record<string, unknown> = {}) => ({ description: "Six small tetras after quarantine", fishCount: 6, quarantineDays: 28, ...over });
 
 describe("stocking batches", () => {
   it("refuses the first batch until the cycle gate is open", async () => {
@@ -64,6 +64,32 @@ describe("stocking batches", () => {
     expect(list.status).toBe(200);
     expect(list.json.batches).toHaveLength(2);
     expect(list.json.batches[1].reTest.status).toBe("zero");
+  });
+
+  it("keeps fish short of the company's quarantine out of the display unless the lead writes why", async () => {
+    const t = await makeTeam("first_stocking");
+    await nearlyCycled(t.project.id, t.crew.id, 40);
+    await insertReadings(t.project.id, t.crew.id, [{ hoursAgo: 3, ammonia: 0, nitrite: 0, nitrate: 40 }]);
+    const crew = await signedIn(t.crew);
+    const url = `/api/projects/${t.project.id}/stocking-batches`;
+    // The company's period is the default 28 days (common practice: about four weeks).
+    const short = await crew.post(url, batch({ quarantineDays: 27 }));
+    expect(short.status).toBe(422);
+    expect(short.json.error).toBe(
+      "New fish are quarantined for 28 days before the display; this batch had 27 days of quarantine. Put it in a holding tank through the stocking plan, or the lead records why it can go in now.",
+    );
+    expect(short.json.canOverride).toBe(false);
+    const none = await crew.post(url, batch({ quarantineDays: null }));
+    expect(none.status).toBe(422);
+    expect(none.json.error).toMatch(/this batch had no quarantine recorded/);
+    expect(await db().select().from(stockingBatches).where(eq(stockingBatches.projectId, t.project.id))).toHaveLength(0);
+
+    const lead = await signedIn(t.lead);
+    const waved = await lead.post(url, batch({ quarantineDays: 0, description: "Snails from our own quarantined stock", overrideReason: "Bred in our own holding system" }));
+    expect(waved.status).toBe(201);
+    expect(waved.json.overridden).toBe(true);
+    const [row] = await db().select().from(stockingBatches).where(eq(stockingBatches.projectId, t.project.id));
+    expect(row.override).toBe("Bred in our own holding system");
   });
 
   it("keeps fish out of a project that hasn't reached first stocking", async () => {

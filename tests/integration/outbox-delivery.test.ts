@@ -54,6 +54,21 @@ describe("the outbox", () => {
     expect(after.sentAt).toBeTruthy();
   }, 90_000);
 
+  it("shows the lead when a held notice will leave", async () => {
+    const t = await makeTeam("cycling");
+    const email = composeEmail({ companyName: "Fixture Aquaria", subject: "Held for tomorrow", greetingName: t.client.name, paragraphs: ["Later."], link: { label: "Open", url: "http://example.test" } });
+    const leaves = new Date(Date.now() + 86_400_000);
+    const id = await enqueueNotice(db(), { kind: "stage_change", projectId: t.project.id, recipientId: t.client.id, toEmail: t.client.email, email, sendAfter: leaves });
+    try {
+      const outbox = await (await signedIn(t.lead)).get("/outbox");
+      expect(outbox.status).toBe(200);
+      expect(outbox.text).toContain("Held for tomorrow");
+      expect(outbox.text).toMatch(/held until \d{1,2} [A-Z][a-z]{2}, \d{2}:\d{2}/);
+    } finally {
+      await db().update(notices).set({ status: "withdrawn" }).where(eq(notices.id, id!));
+    }
+  });
+
   it("never sends a notice twice, even with several workers and duplicate jobs", async () => {
     runners.push(await startWorker({ concurrency: 4, pollInterval: 200 }), await startWorker({ concurrency: 4, pollInterval: 200 }));
     const people = await Promise.all(Array.from({ length: 20 }, () => makeUser("client")));

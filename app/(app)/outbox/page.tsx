@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { formatDistanceToNow } from "date-fns";
+import { format, formatDistanceToNow } from "date-fns";
 import { requirePageUser } from "@/server/session";
 import { db } from "@/db";
 import { listUndelivered } from "@/db/queries/outbox";
@@ -12,6 +12,7 @@ export const dynamic = "force-dynamic";
 export default async function OutboxPage() {
   await requirePageUser("lead");
   const rows = await listUndelivered(db());
+  const now = Date.now();
   return (
     <div className="mx-auto flex max-w-4xl flex-col gap-4">
       <h1 className="text-2xl font-bold tracking-tight">Mail going out</h1>
@@ -30,6 +31,11 @@ export default async function OutboxPage() {
                   <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${r.status === "failed" ? "bg-danger-soft text-danger" : "bg-caution-soft text-caution"}`}>
                     {r.status === "failed" ? "Gave up" : "Waiting"}
                   </span>
+                  {r.status === "waiting" && r.sendAfter.getTime() > now && (
+                    <span className="text-xs text-muted" data-testid="outbox-held-until">
+                      {`held until ${format(r.sendAfter, "d MMM, HH:mm")}`}
+                    </span>
+                  )}
                   <span className="font-medium">{r.subject}</span>
                   <span className="ml-auto text-xs text-muted">{formatDistanceToNow(r.createdAt, { addSuffix: true })}</span>
                 </div>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { DEFAULT_QUARANTINE_DAYS, quarantineDaysLeft, quarantineEndsAt, quarantineVerdict } from "@/lib/stocking/quarantine";
+import { DEFAULT_QUARANTINE_DAYS, directBatchQuarantineReason, quarantineDaysLeft, quarantineEndsAt, quarantineVerdict } from "@/lib/stocking/quarantine";
 import { applyEvent, censusOf, growthSeries } from "@/lib/stocking/census";
 import { groupSentence, growthWords } from "@/lib/stocking/client-words";
 import { tankWaterKind } from "@/lib/stocking/species";
@@ -24,6 +24,24 @@ describe("quarantine", () => {
     expect(quarantineVerdict({ startedAt: start, days: 28, now: early, override: "Fish came from our own holding system" }).done).toBe(true);
     expect(quarantineVerdict({ startedAt: start, days: 28, now: new Date(start.getTime() + 28 * DAY), override: null }).done).toBe(true);
     expect(quarantineVerdict({ startedAt: null, days: 28, now: early, override: null }).done).toBe(false);
+  });
+});
+
+describe("fish recorded straight into the display", () => {
+  it("need the full period, counted inclusively: exactly the company's days is enough, one fewer is not", () => {
+    expect(directBatchQuarantineReason({ days: 28, requiredDays: 28, override: null })).toBeNull();
+    expect(directBatchQuarantineReason({ days: 40, requiredDays: 28, override: null })).toBeNull();
+    expect(directBatchQuarantineReason({ days: 27, requiredDays: 28, override: null })).toBe(
+      "New fish are quarantined for 28 days before the display; this batch had 27 days of quarantine. Put it in a holding tank through the stocking plan, or the lead records why it can go in now.",
+    );
+  });
+  it("say plainly when no quarantine was recorded, and use the singular for one day", () => {
+    expect(directBatchQuarantineReason({ days: null, requiredDays: 28, override: null })).toMatch(/this batch had no quarantine recorded\./);
+    expect(directBatchQuarantineReason({ days: 1, requiredDays: 28, override: null })).toMatch(/this batch had 1 day of quarantine\./);
+  });
+  it("go in with the lead's written reason, and need nothing when the company asks for none", () => {
+    expect(directBatchQuarantineReason({ days: null, requiredDays: 28, override: "Bred in our own holding system" })).toBeNull();
+    expect(directBatchQuarantineReason({ days: null, requiredDays: 0, override: null })).toBeNull();
   });
 });
 

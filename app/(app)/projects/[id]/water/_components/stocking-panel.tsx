@@ -80,7 +80,7 @@ export function StockingPanel({ projectId, batches, canRecord, isLead }: { proje
           <Field id="batch-count" label="Number of fish" error={e.fishCount?.message}>
             <input id="batch-count" inputMode="numeric" className={`${inputStyles} num`} aria-invalid={!!e.fishCount} {...register("fishCount")} />
           </Field>
-          <Field id="batch-quarantine" label="Quarantine (days, optional)" error={e.quarantineDays?.message}>
+          <Field id="batch-quarantine" label="Days already in quarantine" error={e.quarantineDays?.message}>
             <input id="batch-quarantine" inputMode="numeric" className={`${inputStyles} num`} aria-invalid={!!e.quarantineDays} {...register("quarantineDays")} />
           </Field>
           {refusal?.canOverride && (
