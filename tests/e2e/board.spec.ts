@@ -146,8 +146,8 @@ test("the in-service column counts the tanks it doesn't show and opens the full 
   await expect(page).toHaveURL(/\/board$/);
   const column = page.getByTestId("column-in_service");
   await expect(column.getByTestId("in-service-count")).toHaveText("1 needing attention (handed over in the last 14 days or a service visit overdue); 2 more in service");
-  await expect(column.getByText(recent.title)).toBeVisible();
-  await expect(column.getByText(old[0].title)).toHaveCount(0);
+  await expect(column.getByRole("link", { name: recent.title })).toBeVisible();
+  await expect(column.getByRole("link", { name: old[0].title })).toHaveCount(0);
 
   await column.getByTestId("in-service-all").click();
   await expect(page).toHaveURL(/\/board\/in-service$/);
