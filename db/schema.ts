@@ -13,3 +13,4 @@ export * from "./schema/money";
 export * from "./schema/message-reads";
 export * from "./schema/livestock";
 export * from "./schema/sign-in-limits";
+export * from "./schema/service";

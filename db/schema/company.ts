@@ -16,5 +16,9 @@ export const company = pgTable("company", {
   noticeDelaySeconds: integer("notice_delay_seconds"),
   /** Days a new batch of fish spends in a holding tank before the display. */
   quarantineDays: integer("quarantine_days").notNull().default(28),
+  /** IANA time zone the company works in: service visits recur in it. */
+  timeZone: text("time_zone").notNull().default("UTC"),
+  /** Days between services per equipment kind that override lib/service/equipment-kinds. */
+  equipmentIntervals: jsonb("equipment_intervals").$type<Record<string, number | null>>().notNull().default({}),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });

@@ -1,4 +1,4 @@
-import { index, integer, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { date, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { projects } from "./projects";
 import { users } from "./users";
 
@@ -24,6 +24,17 @@ export const visits = pgTable(
     cancelledBy: uuid("cancelled_by").references(() => users.id),
     cancelReason: text("cancel_reason"),
     updatedAt: timestamp("updated_at", { withTimezone: true }),
+    /** Who is to do it; null is unassigned. */
+    assignedTo: uuid("assigned_to").references(() => users.id),
+    /** Set when the visit's report is signed off. */
+    completedAt: timestamp("completed_at", { withTimezone: true }),
+    /** A visit a service plan produced, and the series date it stands for even after it is moved. */
+    servicePlanId: uuid("service_plan_id"),
+    occurrenceOn: date("occurrence_on"),
   },
-  (t) => [index("visits_project_idx").on(t.projectId, t.startsAt)],
+  (t) => [
+    index("visits_project_idx").on(t.projectId, t.startsAt),
+    index("visits_starts_idx").on(t.startsAt),
+    uniqueIndex("visits_plan_occurrence_idx").on(t.servicePlanId, t.occurrenceOn),
+  ],
 );

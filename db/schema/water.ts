@@ -17,6 +17,8 @@ export const waterTests = pgTable(
     pH: doublePrecision("ph"),
     tempC: doublePrecision("temp_c"),
     khDkh: doublePrecision("kh_dkh"),
+    /** Salt water only: practical salinity (ppt, roughly g/kg). */
+    salinityPpt: doublePrecision("salinity_ppt"),
     notes: text("notes"),
     takenBy: uuid("taken_by")
       .notNull()
