@@ -201,6 +201,8 @@ describe("longestIntervalDays", () => {
   });
   it("no rise: any interval keeps the tank under the limit", () => {
     expect(longestIntervalDays({ risePerDayMgL: 0, changeFraction: 0.25, tapNitrateMgL: 5, limitMgL: 40 })).toBe(Number.POSITIVE_INFINITY);
+    // Even with the tap exactly at the limit (0 headroom: 0/0 would be NaN without the rule)
+    expect(longestIntervalDays({ risePerDayMgL: 0, changeFraction: 0.25, tapNitrateMgL: 40, limitMgL: 40 })).toBe(Number.POSITIVE_INFINITY);
   });
   it("tap water exactly at the limit: only no time at all would do, so 0 days", () => {
     expect(longestIntervalDays({ risePerDayMgL: 1, changeFraction: 0.25, tapNitrateMgL: 40, limitMgL: 40 })).toBe(0);
