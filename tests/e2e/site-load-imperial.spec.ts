@@ -58,4 +58,12 @@ test("in inches, pounds and gallons every figure on Site & load and the sheet re
   await expect(sheet.getByTestId("sheet-signatures")).toContainText("Structural engineer");
   await expect(sheet.getByTestId("joist-moment")).toHaveText(/lbf·ft/);
   expect(await metricLeft(sheet)).toEqual([]);
+
+  // Printed, the sheet fits one or two pages on A4 and on Letter.
+  for (const format of ["A4", "Letter"] as const) {
+    const pdf = (await page.pdf({ format, printBackground: false })).toString("latin1");
+    const pages = pdf.match(/\/Type\s*\/Page(?!s)/g)?.length ?? 0;
+    expect(pages, `${format} pages`).toBeGreaterThanOrEqual(1);
+    expect(pages, `${format} pages`).toBeLessThanOrEqual(2);
+  }
 });

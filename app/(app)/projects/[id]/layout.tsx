@@ -15,7 +15,7 @@ export default async function ProjectLayout({ children, params }: { children: Re
   const people = await getProjectPeople(project);
   return (
     <div className="flex flex-col gap-6">
-      <header className="flex flex-col gap-3 rounded-2xl border border-line bg-card p-5">
+      <header className="flex flex-col gap-3 rounded-2xl border border-line bg-card p-5 print:hidden">
         <div className="flex flex-wrap items-center gap-3">
           <h1 className="text-2xl font-bold tracking-tight">{project.title}</h1>
           <StageBadge stage={project.stage} />

@@ -44,8 +44,8 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
     return formatQuantity("length", v, system);
   };
   const stress = (mpa: number) => (system === "metric" ? `${mpa} MPa` : `${formatNumber(mpa / MPA_PER_PSI, 0)} psi`);
-  return (
-    <div className={twoColumns ? "gap-8 text-sm md:columns-2 print:columns-2 [&>*]:mb-5" : "flex flex-col gap-5 text-sm"} data-testid="load-results">
+  const leftBlocks = (
+    <>
       <Block title="Water">
         <dl>
           <Row label="Gross volume (bottom to rim)">{formatBoth("volume", load.grossVolumeL, system)}</Row>
@@ -85,6 +85,10 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
         {floor ? <FloorScreening floor={floor} system={system} /> : <p className="text-muted">Fill in the room use and floor type in the survey to screen the floor.</p>}
       </Block>
 
+    </>
+  );
+  const rightBlocks = (
+    <>
       <Block title="Through the narrowest door">
         {access ? (
           <dl>
@@ -156,6 +160,21 @@ export function LoadResults(props: { results: LoadCheckResults; system: UnitSyst
       )}
 
       {showCautions && <LoadCautions cautions={results.cautions} />}
+    </>
+  );
+  // The sheet sets the blocks in two explicit columns: CSS multi-column breaks badly across printed pages.
+  if (twoColumns) {
+    return (
+      <div className="grid gap-x-8 gap-y-5 text-sm md:grid-cols-2 print:grid-cols-2" data-testid="load-results">
+        <div className="flex flex-col gap-5">{leftBlocks}</div>
+        <div className="flex flex-col gap-5">{rightBlocks}</div>
+      </div>
+    );
+  }
+  return (
+    <div className="flex flex-col gap-5 text-sm" data-testid="load-results">
+      {leftBlocks}
+      {rightBlocks}
     </div>
   );
 }
