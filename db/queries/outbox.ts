@@ -110,6 +110,7 @@ export async function listUndelivered(db: Db) {
       lastError: notices.lastError,
       createdAt: notices.createdAt,
       sendAfter: notices.sendAfter,
+      held: sql<boolean>`${notices.sendAfter} > now()`,
       recipientName: users.name,
     })
     .from(notices)

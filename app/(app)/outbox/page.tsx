@@ -12,7 +12,6 @@ export const dynamic = "force-dynamic";
 export default async function OutboxPage() {
   await requirePageUser("lead");
   const rows = await listUndelivered(db());
-  const now = Date.now();
   return (
     <div className="mx-auto flex max-w-4xl flex-col gap-4">
       <h1 className="text-2xl font-bold tracking-tight">Mail going out</h1>
@@ -31,7 +30,7 @@ export default async function OutboxPage() {
                   <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${r.status === "failed" ? "bg-danger-soft text-danger" : "bg-caution-soft text-caution"}`}>
                     {r.status === "failed" ? "Gave up" : "Waiting"}
                   </span>
-                  {r.status === "waiting" && r.sendAfter.getTime() > now && (
+                  {r.status === "waiting" && r.held && (
                     <span className="text-xs text-muted" data-testid="outbox-held-until">
                       {`held until ${format(r.sendAfter, "d MMM, HH:mm")}`}
                     </span>
