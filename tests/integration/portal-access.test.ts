@@ -186,7 +186,7 @@ describe("account", () => {
     expect((await client.get("/account")).status).toBe(200);
     const put = await client.request("PUT", "/api/me/notifications", { message: false });
     expect(put.status).toBe(200);
-    expect(put.json.prefs).toEqual({ stage_change: true, cycle_ready: true, shared_note: true, message: false });
+    expect(put.json.prefs).toEqual({ stage_change: true, cycle_ready: true, shared_note: true, message: false, visit_report: true });
     expect((await client.request("PUT", "/api/me/notifications", { message: "off" })).status).toBe(400);
     const contact = await client.patch("/api/me/contact", { name: "Fixture Person", phone: "+44 20 0000 0000" });
     expect(contact.status).toBe(200);
