@@ -18,7 +18,9 @@ export interface History {
 
 const VALUE_KEYS = ["ammoniaMgL", "nitriteMgL", "nitrateMgL"] as const;
 
+// Ids are unique, so a === b only when the sort compares a reading with itself.
 function compareIds(a: string, b: string): number {
+  // Stryker disable next-line EqualityOperator,ConditionalExpression: differs only at a === b, which for unique ids is a reading compared with itself and never moves it
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
@@ -29,25 +31,32 @@ function compareIds(a: string, b: string): number {
  * Throws RangeError for an invalid time or a negative/non-numeric value:
  * silently skipping one could hide a non-zero result and pass a tank early.
  */
-export function prepareHistory(input: readonly WaterTest[], fromMs?: number, toMs?: number): History {
+export function prepareHistory(input: readonly WaterTest[], fromMs = -Infinity, toMs = Infinity): History {
   const kept: WaterTest[] = [];
   const times: number[] = [];
+  // The in-order check only decides whether to sort: sorting input that is already in
+  // (time, id) order gives the same result, so a change that makes it sort more often
+  // changes nothing but speed.
+  // Stryker disable next-line BooleanLiteral: starting "out of order" only sorts sorted input, same result
   let inOrder = true;
+  // Stryker disable next-line UnaryOperator: +Infinity only marks the first reading out of order, so sorted input is sorted again, same result
   let prevTime = -Infinity;
+  // Stryker disable next-line StringLiteral: prevId is only read when a time equals prevTime, which the first reading's time (finite) never does
   let prevId = "";
   for (const r of input) {
     if (r.voided) continue;
     const t = r.takenAt.getTime();
     if (Number.isNaN(t)) throw new RangeError(`Reading ${r.id} has no valid time.`);
-    if (fromMs !== undefined && t < fromMs) continue;
+    if (t < fromMs) continue;
     // A reading dated after now (beyond clock drift) is a typo or a wrong clock: it never counts as the latest.
-    if (toMs !== undefined && t > toMs) continue;
+    if (t > toMs) continue;
     for (const key of VALUE_KEYS) {
       const v = r[key];
       if (v != null && !(v >= 0 && v < Infinity)) {
         throw new RangeError(`Reading ${r.id} has an impossible ${key} value (${v}).`);
       }
     }
+    // Stryker disable next-line EqualityOperator,LogicalOperator,ConditionalExpression: the survivors only mark in-order input out of order, which sorts it again to the same result
     if (t < prevTime || (t === prevTime && r.id < prevId)) inOrder = false;
     kept.push(r);
     times.push(t);
@@ -65,14 +74,21 @@ export function prepareHistory(input: readonly WaterTest[], fromMs?: number, toM
 // beyond that the comparator sort takes over.
 function sortByTime(kept: WaterTest[], times: number[]): History {
   const n = kept.length;
+  // Everything from here to the packed sort only chooses between two sorts that give the
+  // same order; a change that picks the comparator sort more often changes nothing but speed.
   let min = Infinity;
+  // Stryker disable next-line UnaryOperator: max = +Infinity only sends every input to the comparator sort, same order
   let max = -Infinity;
   for (const t of times) {
+    // Stryker disable next-line EqualityOperator: t <= min stores the same value again
     if (t < min) min = t;
+    // Stryker disable next-line EqualityOperator: t >= max stores the same value again
     if (t > max) max = t;
   }
   let slots = 1;
+  // Stryker disable next-line EqualityOperator: twice the slots still unpack exactly while the check below holds, or fall back to the comparator sort
   while (slots < n) slots *= 2;
+  // Stryker disable next-line ConditionalExpression,EqualityOperator: "true" only sends all input to the comparator sort (same order); ">=" differs only when an even product equals the odd MAX_SAFE_INTEGER, which never happens
   if ((max - min + 1) * slots > Number.MAX_SAFE_INTEGER) {
     const order = kept.map((_, i) => i);
     order.sort((a, b) => times[a] - times[b] || compareIds(kept[a].id, kept[b].id));
@@ -80,9 +96,12 @@ function sortByTime(kept: WaterTest[], times: number[]): History {
   }
 
   const keys = new Float64Array(n);
+  // Stryker disable next-line EqualityOperator: writing keys[n] past a typed array's end is ignored
   for (let i = 0; i < n; i++) keys[i] = (times[i] - min) * slots + i;
   keys.sort();
+  // Stryker disable next-line ArrayDeclaration: every index is written below, so the initial length changes nothing
   const readings = new Array<WaterTest>(n);
+  // Stryker disable next-line ArrayDeclaration: every index is written below, so the initial length changes nothing
   const sortedTimes = new Array<number>(n);
   for (let i = 0; i < n; i++) {
     const j = keys[i] % slots;
@@ -90,9 +109,12 @@ function sortByTime(kept: WaterTest[], times: number[]): History {
     sortedTimes[i] = times[j];
   }
   // Equal times came out in input order; put them in id order so input order never matters.
+  // Stryker disable next-line EqualityOperator: at start === n the group is empty past the end and nothing is written
   for (let start = 0; start < n; ) {
     let end = start + 1;
+    // Stryker disable next-line ConditionalExpression,EqualityOperator: sortedTimes[n] is undefined, never equal to a time, so the scan stops at n all the same
     while (end < n && sortedTimes[end] === sortedTimes[start]) end++;
+    // Stryker disable next-line ConditionalExpression,EqualityOperator,ArithmeticOperator: sorting a group of one reading leaves it as it is
     if (end - start > 1) {
       const group = readings.slice(start, end).sort((a, b) => compareIds(a.id, b.id));
       for (let k = 0; k < group.length; k++) readings[start + k] = group[k];
@@ -132,6 +154,7 @@ export function latestValue(h: History, analyte: Analyte): { value: number; time
 export function firstValueSince(h: History, analyte: Analyte, fromMs: number): { value: number; time: number } | undefined {
   const key = FIELD[analyte];
   let found: { value: number; time: number } | undefined;
+  // Stryker disable next-line ConditionalExpression: at i = -1, h.times[-1] is undefined and "undefined >= fromMs" is false, so the loop stops there too
   for (let i = h.readings.length - 1; i >= 0 && h.times[i] >= fromMs; i--) {
     const v = h.readings[i][key];
     if (v != null) found = { value: v, time: h.times[i] };

@@ -89,6 +89,7 @@ function scanZeroRun(h: History, rules: CycleRules): ZeroRun {
       break;
     }
     if (!isZeroPair(r)) continue;
+    // Stryker disable next-line EqualityOperator: newest is only 0 once the walk has reached the oldest reading, after which there is no i to store
     if (run.newest < 0) run.newest = i;
     run.oldest = i;
     run.total++;
@@ -124,18 +125,20 @@ function zeroRunReason(h: History, run: ZeroRun, rules: CycleRules): string | un
   return `${head}; there ${run.counted === 1 ? "is only one" : `are only ${countWord(run.counted)}`} so far.`;
 }
 
-function newestCompleteIndex(h: History): number {
+/** Time of the newest reading that tested both ammonia and nitrite. */
+function newestCompleteTime(h: History): number | undefined {
   for (let i = h.readings.length - 1; i >= 0; i--) {
     const r = h.readings[i];
-    if (r.ammoniaMgL != null && r.nitriteMgL != null) return i;
+    if (r.ammoniaMgL != null && r.nitriteMgL != null) return h.times[i];
   }
-  return -1;
+  return undefined;
 }
 
 function doseReason(h: History, doseMs: number, refMs: number, rules: CycleRules): string | undefined {
   const deadline = doseMs + rules.clearWithinHoursOfDose * HOUR_MS;
   let tested = false;
   // Strictly after: a test logged at the dose's own time was taken before dosing.
+  // Stryker disable next-line ConditionalExpression: at i = -1, h.times[-1] is undefined and "undefined > doseMs" is false, so the loop stops there too
   for (let i = h.readings.length - 1; i >= 0 && h.times[i] > doseMs; i--) {
     if (h.times[i] > deadline) continue;
     const r = h.readings[i];
@@ -152,16 +155,16 @@ function doseReason(h: History, doseMs: number, refMs: number, rules: CycleRules
     : `Ammonia was dosed ${ago} and wasn't tested within ${within} of it.`;
 }
 
-function lastDoseTime(doses: readonly AmmoniaDose[], fromMs: number | undefined): number | undefined {
-  let last: number | undefined;
+function lastDoseTime(doses: readonly AmmoniaDose[], fromMs = -Infinity): number | undefined {
+  let last = -Infinity;
   for (const d of doses) {
     if (d.voided) continue;
     const t = d.dosedAt.getTime();
     if (Number.isNaN(t)) throw new RangeError(`Dose ${d.id} has no valid time.`);
-    if (fromMs !== undefined && t < fromMs) continue;
-    if (last === undefined || t > last) last = t;
+    if (t < fromMs) continue;
+    last = Math.max(last, t);
   }
-  return last;
+  return last === -Infinity ? undefined : last;
 }
 
 function validTime(date: Date | undefined, name: string): number | undefined {
@@ -188,15 +191,15 @@ export function evaluateCycle(readings: readonly WaterTest[], options: EvaluateC
   const rules = resolveCycleRules(options.rules);
   const fromMs = validTime(options.cycleStartedAt, "The cycle start");
   const nowMs = validTime(options.now, "The current time");
-  const h = prepareHistory(readings, fromMs, nowMs === undefined ? undefined : nowMs + READING_LIMITS.futureToleranceMinutes * 60_000);
+  const h = prepareHistory(readings, fromMs, (nowMs ?? Infinity) + READING_LIMITS.futureToleranceMinutes * 60_000);
   const doseMs = lastDoseTime(options.doses ?? [], fromMs);
   const n = h.readings.length;
-  const newestMs = n > 0 ? h.times[n - 1] : undefined;
+  const newestMs = h.times.at(-1);
   const refMs = nowMs ?? (doseMs === undefined ? newestMs : Math.max(doseMs, newestMs ?? doseMs));
-  const startMs = fromMs ?? (n > 0 ? h.times[0] : undefined);
+  const startMs = fromMs ?? h.times.at(0);
   const daysSinceStart =
     refMs === undefined || startMs === undefined ? null : Math.max(0, Math.floor((refMs - startMs) / DAY_MS));
-  const latest = n > 0 ? h.readings[n - 1] : undefined;
+  const latest = h.readings.at(-1);
 
   if (n === 0) {
     return {
@@ -208,13 +211,8 @@ export function evaluateCycle(readings: readonly WaterTest[], options: EvaluateC
     };
   }
 
-  let seenAmmoniaOrNitrite = false;
-  let seenNitrate = false;
-  for (const r of h.readings) {
-    if (!seenAmmoniaOrNitrite && showsAmmoniaOrNitrite(r)) seenAmmoniaOrNitrite = true;
-    if (!seenNitrate && (r.nitrateMgL ?? 0) > 0) seenNitrate = true;
-    if (seenAmmoniaOrNitrite && seenNitrate) break;
-  }
+  const seenAmmoniaOrNitrite = h.readings.some(showsAmmoniaOrNitrite);
+  const seenNitrate = h.readings.some((r) => (r.nitrateMgL ?? 0) > 0);
   const started = seenAmmoniaOrNitrite || doseMs !== undefined;
 
   const reasons: string[] = [];
@@ -227,8 +225,8 @@ export function evaluateCycle(readings: readonly WaterTest[], options: EvaluateC
   if (nowMs === undefined) {
     reasons.push("The current time wasn't given, so the age of the latest test can't be checked.");
   } else {
-    const complete = newestCompleteIndex(h);
-    const ageHours = complete < 0 ? 0 : (nowMs - h.times[complete]) / HOUR_MS;
+    // With no complete test at all, the zero-run reason already asks for one.
+    const ageHours = (nowMs - (newestCompleteTime(h) ?? nowMs)) / HOUR_MS;
     if (ageHours > rules.maxAgeHoursOfLatest) {
       reasons.push(`The latest ammonia and nitrite test is ${formatDuration(ageHours)} old; take a new one.`);
     }
@@ -256,7 +254,8 @@ export function evaluateCycle(readings: readonly WaterTest[], options: EvaluateC
   }
 
   const result: CycleEvaluation = { ready, phase, reasons, daysSinceStart, latest, rules };
-  if (run.newest >= 0 && run.oldest !== run.newest) {
+  // Both are -1 when the run has no zero, and equal when it has one.
+  if (run.oldest !== run.newest) {
     result.lastZeroPair = {
       earlier: h.readings[run.oldest],
       later: h.readings[run.newest],

@@ -86,7 +86,7 @@ const AMOUNTS: readonly { field: AmountField; name: string; max: number; unit: s
 ];
 
 function isNumber(value: unknown): value is number {
-  return typeof value === "number" && Number.isFinite(value);
+  return Number.isFinite(value);
 }
 
 /**

@@ -67,9 +67,12 @@ function roughly(value: number): string {
 export function readingWarnings(reading: WarningReading, { fishPresent }: { fishPresent: boolean }): CycleWarning[] {
   if (reading.voided) return [];
   const out: CycleWarning[] = [];
-  const { ammoniaMgL, nitriteMgL, pH, tempC, khDkh } = reading;
+  const { pH, tempC, khDkh } = reading;
+  // Not tested reads as nothing to warn about.
+  const ammoniaMgL = reading.ammoniaMgL ?? 0;
+  const nitriteMgL = reading.nitriteMgL ?? 0;
 
-  if (fishPresent && ammoniaMgL != null && ammoniaMgL > 0) {
+  if (fishPresent && ammoniaMgL > 0) {
     if (canComputeFreeAmmonia(pH, tempC)) {
       const free = freeAmmoniaMgL(ammoniaMgL, pH as number, tempC as number);
       const where = `free ammonia is about ${roughly(free)} mg/L NH3 at pH ${pH} and ${tempC} °C`;
@@ -95,7 +98,7 @@ export function readingWarnings(reading: WarningReading, { fishPresent }: { fish
     }
   }
 
-  if (fishPresent && nitriteMgL != null && nitriteMgL >= WARNING_THRESHOLDS.nitriteDangerMgL) {
+  if (fishPresent && nitriteMgL >= WARNING_THRESHOLDS.nitriteDangerMgL) {
     out.push({
       level: "danger",
       code: "nitrite",

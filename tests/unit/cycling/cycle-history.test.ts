@@ -216,3 +216,82 @@ describe("prepareHistory: bad input and order", () => {
     }
   });
 });
+
+describe("prepareHistory: the packed sort and its fallback", () => {
+  it("keeps times beside their readings in the comparator sort", () => {
+    const input = [plain("late", 8e15), plain("early", -8e15), plain("mid", 0)];
+    expect(prepareHistory(input).times).toEqual([-8e15, 0, 8e15]);
+  });
+
+  it("falls back to the comparator sort when the largest time isn't the last one given", () => {
+    // Packed, 4e15 × 4 slots + 1 is past 2^53 and can't be unpacked exactly.
+    const input = [plain("early", 0), plain("late", 4e15), plain("mid", 1)];
+    const h = prepareHistory(input);
+    expect(h.readings.map((r) => r.id)).toEqual(["early", "mid", "late"]);
+    expect(h.times).toEqual([0, 1, 4e15]);
+  });
+
+  it("falls back exactly at the edge of exact packing: a span of 2^51 ms with four slots", () => {
+    const base = 1_000_000;
+    const input = [plain("second", base + 1), plain("last", base + 2 ** 51), plain("first", base)];
+    expect(prepareHistory(input).readings.map((r) => r.id)).toEqual(["first", "second", "last"]);
+  });
+
+  it("packs offsets from the earliest time, so 3,000 reversed readings come out in order", () => {
+    const input = Array.from({ length: 3000 }, (_, i) => plain(`id${String(i).padStart(4, "0")}`, T0 + (3000 - i) * 60_000));
+    const h = prepareHistory(input);
+    expect(h.readings[0].id).toBe("id2999");
+    expect(h.readings[2999].id).toBe("id0000");
+    expectTimeThenIdOrder(h);
+  });
+
+  it("orders 200 same-time readings by id from a scrambled input", () => {
+    const ids = Array.from({ length: 200 }, (_, i) => `id${String((i * 73) % 200).padStart(3, "0")}`);
+    const input = ids.map((id) => plain(id, T0));
+    expect(prepareHistory(input).readings.map((r) => r.id)).toEqual([...ids].sort());
+  });
+
+  it("keeps a reading exactly at the upper bound and drops one a millisecond past it", () => {
+    const input = [plain("on", T0), plain("past", T0 + 1), plain("before", T0 - 1)];
+    expect(prepareHistory(input, undefined, T0).readings.map((r) => r.id)).toEqual(["before", "on"]);
+  });
+
+  it("treats a value left out altogether as not tested, not as impossible", () => {
+    const loose = { ...plain("a", T0), nitrateMgL: undefined } as unknown as WaterTest;
+    expect(prepareHistory([loose]).readings).toEqual([loose]);
+  });
+});
+
+describe("firstValueSince and isStalled: tests that skipped an analyte", () => {
+  it("firstValueSince skips the oldest test in the window when it didn't read the analyte", () => {
+    const h = prepareHistory([
+      reading(at(0), { ammoniaMgL: 2 }),
+      reading(at(1), { nitriteMgL: 0.5 }),
+      reading(at(2), { ammoniaMgL: 1 }),
+    ]);
+    expect(firstValueSince(h, "ammonia", at(1).getTime())).toEqual({ value: 1, time: at(2).getTime() });
+  });
+
+  const stalled = (readings: WaterTest[], ref: Date) =>
+    isStalled(prepareHistory(readings), ref.getTime(), DEFAULT_CYCLE_RULES.stallDays, DEFAULT_CYCLE_RULES.stallChangeMgL);
+
+  it("nitrite held at 2 mg/L for twelve days in tests that skipped ammonia is a stall", () => {
+    const readings = Array.from({ length: 13 }, (_, d) => reading(at(d), { nitriteMgL: 2 }));
+    expect(stalled(readings, at(12, 1))).toBe(true);
+  });
+
+  it("ammonia held at 1 mg/L, tested every other day, with nitrite held daily, is a stall", () => {
+    const readings = Array.from({ length: 13 }, (_, d) => reading(at(d), { ammoniaMgL: d % 2 === 0 ? 1 : null, nitriteMgL: 2 }));
+    expect(stalled(readings, at(12, 1))).toBe(true);
+  });
+
+  it("nitrite held at 1 mg/L, tested every other day, with ammonia held daily, is a stall", () => {
+    const readings = Array.from({ length: 13 }, (_, d) => reading(at(d), { ammoniaMgL: 1, nitriteMgL: d % 2 === 0 ? 1 : null }));
+    expect(stalled(readings, at(12, 1))).toBe(true);
+  });
+
+  it("a trace of ammonia on the newest test over ten days of zero/zero is still a stall", () => {
+    const readings = Array.from({ length: 13 }, (_, d) => reading(at(d), { ammoniaMgL: d === 12 ? 0.1 : 0, nitriteMgL: 0 }));
+    expect(stalled(readings, at(12, 1))).toBe(true);
+  });
+});

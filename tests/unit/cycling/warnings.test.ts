@@ -95,3 +95,23 @@ describe("stallWarning", () => {
     expect(stallWarning(drifting, at(11, 1), 10, 2)?.code).toBe("stall");
   });
 });
+
+describe("readingWarnings: edges of the inputs", () => {
+  it("pH 0 is inside the range the free-ammonia formula takes: no 'add pH' caution, only low pH", () => {
+    expect(readingWarnings(test({ ammoniaMgL: 1, pH: 0 }), fish)).toEqual([
+      {
+        level: "caution",
+        code: "low-ph",
+        message: "pH is 0: the bacteria slow down a lot below about 6.5, so the cycle may stall.",
+      },
+    ]);
+  });
+
+  it("an untested KH (null) gives no low-KH caution", () => {
+    expect(readingWarnings(test({ khDkh: null }), noFish)).toEqual([]);
+  });
+
+  it("untested ammonia and nitrite give nothing, even with fish", () => {
+    expect(readingWarnings(test({ ammoniaMgL: null, nitriteMgL: null }), fish)).toEqual([]);
+  });
+});
