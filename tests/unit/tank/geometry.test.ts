@@ -8,9 +8,10 @@ import {
   internalHeightMm,
   outerPlanAreaMm2,
   outerPlanExtentMm,
+  smallestPlanDimensionMm,
   waterHeightMm,
 } from "@/lib/tank/geometry";
-import { demoDesign } from "./fixtures";
+import { bareRectangular, demoDesign } from "./fixtures";
 
 describe("circularSegmentArea", () => {
   it("a half-circle is π r² / 2", () => {
@@ -97,5 +98,21 @@ describe("design geometry", () => {
   it("bottom thickness defaults to the side thickness but can differ", () => {
     const d = { ...demoDesign(), bottomThicknessMm: 19 };
     expect(internalHeightMm(d)).toBe(681); // 700 − 19
+  });
+});
+
+describe("geometry: degenerate shapes", () => {
+  it("a segment with no chord or no sagitta has no area", () => {
+    expect(circularSegmentArea(0, 10)).toBe(0);
+    expect(circularSegmentArea(10, 0)).toBe(0);
+  });
+
+  it("a bowfront with no bow is the rectangle inside the panels", () => {
+    expect(bowfrontPlanAreaMm2(1000, 400, 0, 10)).toBe(980 * 380);
+  });
+
+  it("a bowfront's smallest plan dimension is the smaller of its length and end width", () => {
+    const bow: TankDesign = { ...bareRectangular(1200, 500, 600, 10), shape: "bowfront", bowDepthMm: 150 };
+    expect(smallestPlanDimensionMm(bow)).toBe(500);
   });
 });

@@ -89,6 +89,13 @@ describe("computeLoad: variations on the demo", () => {
     expect(soil.substrateMassKg).toBeCloseTo(60.534, 4); // 1000 kg/m³, from memory
     expect(soil.netVolumeL).toBeCloseTo(640.6515 - 60.534 * 0.5 - 15.3846, 4); // porosity 0.5: 594.9999 L
   });
+
+  it("no substrate means no bed, even if a depth was left in the form", () => {
+    const none = computeLoad({ ...demoDesign(), substrate: { type: "none", depthMm: 60 } });
+    expect(none.substrateVolumeL).toBe(0);
+    expect(none.substrateMassKg).toBe(0);
+    expect(none.netVolumeL).toBeCloseTo(640.6515 - 15.3846, 4); // water space less the rock only
+  });
 });
 
 describe("computeLoad: other shapes", () => {
