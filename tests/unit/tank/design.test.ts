@@ -110,3 +110,23 @@ describe("validateDesign", () => {
     expect(fields).toEqual(expect.arrayContaining(["lengthMm", "heightMm", "waterBelowRimMm"]));
   });
 });
+
+describe("validateDesign: the ends of the water ranges are inclusive", () => {
+  it("takes 0 °C and 40 °C (the range Tanaka et al. 2001 and EOS-80 cover) and refuses just outside", () => {
+    expect(fieldsOf({ ...demoDesign(), temperatureC: 0 })).toEqual([]);
+    expect(fieldsOf({ ...demoDesign(), temperatureC: 40 })).toEqual([]);
+    expect(fieldsOf({ ...demoDesign(), temperatureC: -0.1 })).toEqual(["temperatureC"]);
+    expect(validateDesign({ ...demoDesign(), temperatureC: 40.1 })).toEqual([
+      { field: "temperatureC", message: "Water temperature must be between 0 °C and 40 °C." },
+    ]);
+  });
+
+  it("takes salinity from 0 to 42 psu (EOS-80's one-atmosphere range, Millero & Poisson 1981) and refuses just outside", () => {
+    expect(fieldsOf({ ...demoDesign(), water: "salt", salinityPsu: 0 })).toEqual([]);
+    expect(fieldsOf({ ...demoDesign(), water: "salt", salinityPsu: 42 })).toEqual([]);
+    expect(fieldsOf({ ...demoDesign(), water: "salt", salinityPsu: -0.1 })).toEqual(["salinityPsu"]);
+    expect(validateDesign({ ...demoDesign(), water: "salt", salinityPsu: 42.1 })).toEqual([
+      { field: "salinityPsu", message: "Salinity must be between 0 and 42 psu (natural seawater is about 35)." },
+    ]);
+  });
+});

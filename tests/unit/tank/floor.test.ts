@@ -116,6 +116,15 @@ describe("joistLoadEffects: hand-worked cases", () => {
     expect(mostLoadedJoistShare({ ...legs, widthMm: 350 }, 400, "parallel").loadShare).toBe(1);
   });
 
+  it("a row is half the legs rounded up, and two legs across the joists put everything on one", () => {
+    const withLegs = (count: number) => ({ ...standSolid, footprint: { kind: "legs" as const, count, legLengthMm: 80, legWidthMm: 80 } });
+    // 6 legs in two rows of 3; 5 legs: a row of 3
+    expect(mostLoadedJoistShare(withLegs(6), 400, "parallel").loadShare).toBe(3 / 6);
+    expect(mostLoadedJoistShare(withLegs(5), 400, "parallel").loadShare).toBe(3 / 5);
+    expect(mostLoadedJoistShare(withLegs(2), 400, "perpendicular").loadShare).toBe(1);
+    expect(mostLoadedJoistShare(withLegs(6), 400, "perpendicular").loadShare).toBe(2 / 6);
+  });
+
   it("a stand past the span is flagged", () => {
     expect(joistLoadEffects(joistCase({ distanceFromSupportMm: 3600 })).beyondSpan).toBe(true);
     expect(joistLoadEffects(joistCase({ distanceFromSupportMm: 3500 })).beyondSpan).toBe(false);

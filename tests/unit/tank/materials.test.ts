@@ -38,6 +38,16 @@ describe("substrateQuantity", () => {
   });
 });
 
+describe("substrateQuantity: rounding to whole bags", () => {
+  // 1000 × 500 × 100 mm = 50 L of bed.
+  const bed = { footprintLengthMm: 1000, footprintWidthMm: 500, depthMm: 100, bulkDensityKgM3: 1600 };
+  it("a millionth of a bag over still buys another bag; floating-point dust (10⁻¹²) does not", () => {
+    expect(substrateQuantity({ ...bed, bagSizeL: 50 / 5.000001 }).bags).toBe(6);
+    expect(substrateQuantity({ ...bed, bagSizeL: 10 }).bags).toBe(5);
+    expect(substrateQuantity({ ...bed, bagSizeL: 50 / (5 + 1e-12) }).bags).toBe(5);
+  });
+});
+
 describe("fillPlan", () => {
   it("demo tank's net volume at 15 L/min with 5 mL per 100 L", () => {
     // 588.9465 L / 15 L/min = 39.263 min; 588.9465 × 5 / 100 = 29.447 mL (straight proportion)
