@@ -123,6 +123,8 @@ describe("joistLoadEffects: hand-worked cases", () => {
     expect(mostLoadedJoistShare(withLegs(5), 400, "parallel").loadShare).toBe(3 / 5);
     expect(mostLoadedJoistShare(withLegs(2), 400, "perpendicular").loadShare).toBe(1);
     expect(mostLoadedJoistShare(withLegs(6), 400, "perpendicular").loadShare).toBe(2 / 6);
+    // A stand exactly as wide as the spacing puts its rows on two joists: still half the legs each.
+    expect(mostLoadedJoistShare({ ...withLegs(4), widthMm: 400 }, 400, "parallel").loadShare).toBe(0.5);
   });
 
   it("a stand past the span is flagged", () => {

@@ -86,6 +86,15 @@ describe("minimumPanelThickness: notes, the bound and ok", () => {
     expect(r.ok).toBe(false);
   });
 
+  it("past the table with nothing entered, it gives the need without claiming anything meets it", () => {
+    const need = 800 * Math.sqrt((0.28 * 1000 * G * 1.3) / SIGMA);
+    const r = minimumPanelThickness({ waterHeightMm: 1300, panelLengthMm: 800, material: "glass" });
+    expect(r.message).toBe(
+      `Needs at least ${need.toFixed(1)} mm (next standard glass: 25 mm). ${BEYOND} An open-top panel this shape needs a centre brace (or a top frame), or the panel maker's own calculation.`,
+    );
+    expect(r.ok).toBeNull();
+  });
+
   it("past the table with a braced top, too thin, it keeps the usual verdict and asks for a brace", () => {
     // L/H = 5, case 1e at its end, β = 0.37, b = H
     const need = 500 * Math.sqrt((0.37 * 1000 * G * 0.5) / SIGMA);
