@@ -6,7 +6,9 @@ export default defineConfig({
   timeout: 60_000,
   expect: { timeout: 10_000 },
   fullyParallel: false,
-  workers: 1,
+  // Two at a time: the page sweep (which only reads) beside the other tests, and two sweeps at once
+  // when the flows are done.
+  workers: 2,
   retries: process.env.CI ? 1 : 0,
   reporter: [["list"]],
   use: {
@@ -17,5 +19,9 @@ export default defineConfig({
       args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
     },
   },
-  projects: [{ name: "chromium", use: { ...devices["Desktop Chrome"], channel: undefined } }],
+  projects: [
+    // The flows write to the shared test database one at a time; the sweeps read the demo beside them.
+    { name: "flows", testIgnore: /sweep\.spec\.ts/, workers: 1, use: { ...devices["Desktop Chrome"], channel: undefined } },
+    { name: "sweep", testMatch: /sweep\.spec\.ts/, use: { ...devices["Desktop Chrome"], channel: undefined } },
+  ],
 });

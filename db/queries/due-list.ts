@@ -29,9 +29,9 @@ export async function loadDueItems(opts: { user: Pick<SessionUser, "id" | "role"
   const settings = await getServiceSettings();
   const tz = settings.timeZone;
   const today = localDay(now, tz);
-  const weekStarts = zonedInstant(opts.week.from, tz, 0);
-  const weekEnds = zonedInstant(addDays(opts.week.to, 1), tz, 0);
-  const todayStarts = zonedInstant(today, tz, 0);
+  const weekStarts = zonedInstant(opts.week.from, "00:00", tz);
+  const weekEnds = zonedInstant(addDays(opts.week.to, 1), "00:00", tz);
+  const todayStarts = zonedInstant(today, "00:00", tz);
   const visible = visibleProjectsWhere(opts.user);
 
   const crewIds = sql<string[]>`array(select pc.user_id::text from ${projectCrew} pc where pc.project_id = ${projects.id})`;

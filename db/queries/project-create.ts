@@ -1,10 +1,12 @@
 import "server-only";
-import { and, asc, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "../index";
-import { projectCrew, projects, stageEvents, users } from "../schema";
+import { projectCrew, projects, stageEvents, users, visits } from "../schema";
 import { inviteUserInTx } from "./users";
 import { keyBetween } from "../../lib/stages/ordering";
-import { badRequest, conflict, notFound } from "../../server/errors";
+import { badRequest, conflict, notFound, unprocessable } from "../../server/errors";
+import { shiftInstallVisits } from "../../lib/install/install-day-dates";
+import { companyTimeZone } from "./service-plans";
 import { COLUMN_LOCK_SPACE, STALE_MESSAGE } from "./project-move";
 import type { Role } from "../../lib/auth/roles";
 
@@ -95,8 +97,12 @@ type DetailsChange = {
   crewIds?: string[];
 };
 
-/** Changes a project's details under its version; crew, when sent, replace the assignment list. */
-export async function updateProjectDetails(projectId: string, change: DetailsChange) {
+/**
+ * Changes a project's details under its version; crew, when sent, replace the assignment list. A new
+ * target install date moves the install-day visits still ahead with it; clearing the date while one
+ * is booked is refused (the visit is the plan: it is moved or cancelled on the Visits page).
+ */
+export async function updateProjectDetails(projectId: string, change: DetailsChange, now = new Date()) {
   return db().transaction(async (tx) => {
     const [project] = await tx.select().from(projects).where(eq(projects.id, projectId)).for("update");
     if (!project) throw notFound();
@@ -105,7 +111,12 @@ export async function updateProjectDetails(projectId: string, change: DetailsCha
     if (change.title !== undefined) set.title = change.title;
     if (change.siteAddress !== undefined) set.siteAddress = change.siteAddress;
     if (change.siteTown !== undefined) set.siteTown = change.siteTown;
-    if (change.targetInstallDate !== undefined) set.targetInstallDate = change.targetInstallDate || null;
+    let movedInstallVisits = 0;
+    if (change.targetInstallDate !== undefined) {
+      const target = change.targetInstallDate || null;
+      set.targetInstallDate = target;
+      if (target !== project.targetInstallDate) movedInstallVisits = await moveBookedInstallDays(tx, projectId, target, now);
+    }
     if (change.targetHandoverDate !== undefined) set.targetHandoverDate = change.targetHandoverDate || null;
     if (change.tankSummary !== undefined) set.tankSummary = change.tankSummary || null;
     if (change.crewIds) {
@@ -116,8 +127,23 @@ export async function updateProjectDetails(projectId: string, change: DetailsCha
       if (crewIds.length) await tx.insert(projectCrew).values(crewIds.map((userId) => ({ projectId, userId })));
     }
     const [updated] = await tx.update(projects).set(set).where(eq(projects.id, projectId)).returning();
-    return updated;
+    return { ...updated, movedInstallVisits };
   });
+}
+
+/** Moves the install-day visits still ahead so the first falls on `target`; answers how many moved. */
+async function moveBookedInstallDays(tx: Tx, projectId: string, target: string | null, now: Date): Promise<number> {
+  const booked = await tx
+    .select({ id: visits.id, startsAt: visits.startsAt })
+    .from(visits)
+    .where(and(eq(visits.projectId, projectId), eq(visits.kind, "install day"), isNull(visits.cancelledAt), isNull(visits.completedAt), gt(visits.startsAt, now)));
+  if (!booked.length) return 0;
+  if (!target) {
+    throw unprocessable("An install day is booked for this project. Move or cancel it on the Visits page, or give a new target date instead of clearing it.");
+  }
+  const moved = shiftInstallVisits(booked, target, await companyTimeZone(tx));
+  for (const m of moved) await tx.update(visits).set({ startsAt: m.startsAt, updatedAt: now }).where(eq(visits.id, m.id));
+  return moved.length;
 }
 
 /** The people the new-project form offers. */

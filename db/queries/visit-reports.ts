@@ -8,7 +8,7 @@ import { equipmentServicedOnVisit } from "./visit-equipment";
 import { getDesignVolume, type ReadingValues } from "./water";
 import { mayEditReport, reopenRefusal, signOffRefusal, type Signer } from "../../lib/service/sign-off";
 import { waterChangeLitres } from "../../lib/service/water-change-volume";
-import { localDate } from "../../lib/service/time-zone";
+import { localDay } from "../../lib/service/local-dates";
 import { visitReportEmail, waterTestLine } from "../../lib/mail/visit-report-email";
 import { AppError, badRequest, conflict, forbidden, notFound } from "../../server/errors";
 import { env } from "../../env";
@@ -92,7 +92,7 @@ export async function getVisitReport(opts: { projectId: string; visitId: string;
     visit: {
       id: visit.id,
       startsAt: visit.startsAt,
-      localDay: localDate(visit.startsAt, tz),
+      localDay: localDay(visit.startsAt, tz),
       assignedTo: visit.assignedTo,
       assigneeName: assignee?.name ?? null,
       completedAt: visit.completedAt,
@@ -221,8 +221,8 @@ export async function signOffVisit(opts: { projectId: string; visitId: string; w
     const refusal = signOffRefusal(opts.who, {
       cancelledAt: visit.cancelledAt,
       completedAt: visit.completedAt,
-      visitDay: localDate(visit.startsAt, tz),
-      today: localDate(now, tz),
+      visitDay: localDay(visit.startsAt, tz),
+      today: localDay(now, tz),
       tasksDone: tasks.filter((t) => t.done).length,
       clientNotes: report.clientNotes,
     });

@@ -7,6 +7,8 @@ import { visibleProjectsWhere } from "./project-access";
 import type { SessionUser } from "../../server/session";
 import { notFound } from "../../server/errors";
 import type { visitKinds } from "../schema/visits";
+import { installDateOf } from "../../lib/install/install-day-dates";
+import { companyTimeZone } from "./service-plans";
 
 export type VisitKind = (typeof visitKinds)[number];
 
@@ -32,8 +34,6 @@ export async function nextVisits(projectIds: string[], now = new Date()) {
   return out;
 }
 
-/** The calendar date of an install-day visit, as the project's one target install date. */
-const installDate = (startsAt: Date) => startsAt.toISOString().slice(0, 10);
 
 /**
  * Books a visit. Booking the install day moves the project's target install date to that day, in
@@ -45,7 +45,7 @@ export async function addVisit(opts: { projectId: string; kind: VisitKind; start
       .insert(visits)
       .values({ projectId: opts.projectId, kind: opts.kind, startsAt: opts.startsAt, durationMinutes: opts.durationMinutes, notes: opts.notes, createdBy: opts.by })
       .returning();
-    if (row.kind === "install day") await tx.update(projects).set({ targetInstallDate: installDate(row.startsAt), updatedAt: new Date() }).where(eq(projects.id, opts.projectId));
+    if (row.kind === "install day") await tx.update(projects).set({ targetInstallDate: installDateOf(row.startsAt, await companyTimeZone(tx)), updatedAt: new Date() }).where(eq(projects.id, opts.projectId));
     return row;
   });
 }
@@ -59,7 +59,7 @@ export async function updateVisit(opts: { projectId: string; visitId: string; ki
       .where(and(eq(visits.id, opts.visitId), eq(visits.projectId, opts.projectId), isNull(visits.cancelledAt)))
       .returning();
     if (!row) throw notFound("That visit");
-    if (row.kind === "install day") await tx.update(projects).set({ targetInstallDate: installDate(row.startsAt), updatedAt: new Date() }).where(eq(projects.id, opts.projectId));
+    if (row.kind === "install day") await tx.update(projects).set({ targetInstallDate: installDateOf(row.startsAt, await companyTimeZone(tx)), updatedAt: new Date() }).where(eq(projects.id, opts.projectId));
     return row;
   });
 }

@@ -16,7 +16,14 @@ export type QueuedPhoto = {
   /** When the camera took it, as an ISO instant, if the photo said. */
   takenAt: string | null;
   queuedAt: string;
+  /** Taken for a checklist item (the item's own photo button) rather than the day's photo panel. */
+  forItemId?: string | null;
+  /** "Mark done" pressed before the photo was sent: the tick waits for the photo's id, then follows it. */
+  thenTick?: HeldTick | null;
 };
+
+/** A tick that can't be sent yet because the photo it needs is still on the phone. */
+export type HeldTick = { itemId: string; note: string | null; value: number | null; heldAt: string };
 
 /** The longest side a photo is shrunk to before it is sent: plenty for a record of the work. */
 export const SEND_LONG_SIDE_PX = 2500;
@@ -67,6 +74,24 @@ export function newPhotoKey(): string {
 
 const KEY_SHAPE = /^[A-Za-z0-9_-]{8,80}$/;
 
+/**
+ * The key of the tick that follows a photo. Made from the photo's own key, so if the phone sends the
+ * photo again (the answer was lost, or the page closed before the photo left the queue) the server
+ * answers the repeat tick with the first one too.
+ */
+export const tickKeyForPhoto = (photoKey: string) => `t-${photoKey}`;
+
+function isHeldTick(t: unknown): t is HeldTick {
+  if (!t || typeof t !== "object") return false;
+  const h = t as Record<string, unknown>;
+  return (
+    typeof h.itemId === "string" &&
+    typeof h.heldAt === "string" &&
+    (h.note === null || typeof h.note === "string") &&
+    (h.value === null || (typeof h.value === "number" && Number.isFinite(h.value)))
+  );
+}
+
 /** Reads a stored queue, dropping anything malformed rather than failing the page. */
 export function parsePhotoQueue<T extends QueuedPhoto>(data: unknown, hasBytes: (entry: Record<string, unknown>) => boolean): T[] {
   if (!Array.isArray(data)) return [];
@@ -80,8 +105,24 @@ export function parsePhotoQueue<T extends QueuedPhoto>(data: unknown, hasBytes: 
       typeof p.fileName === "string" &&
       typeof p.contentType === "string" &&
       typeof p.queuedAt === "string" &&
+      (p.forItemId == null || typeof p.forItemId === "string") &&
       hasBytes(p),
-  );
+  ).map((p) => (p.thenTick == null || isHeldTick(p.thenTick) ? p : { ...p, thenTick: null }));
+}
+
+/**
+ * The queue with a tick held on one photo, or null when that photo is no longer waiting (it has been
+ * sent, and the caller already has its id).
+ */
+export function holdTick<T extends QueuedPhoto>(queue: T[], photoKey: string, tick: HeldTick): T[] | null {
+  if (!queue.some((p) => p.clientKey === photoKey)) return null;
+  return queue.map((p) => (p.clientKey === photoKey ? { ...p, forItemId: tick.itemId, thenTick: tick } : p));
+}
+
+/** The photo still waiting for one checklist item, if any: the newest one taken for it. */
+export function waitingPhotoFor<T extends QueuedPhoto>(queue: T[], itemId: string): T | null {
+  const mine = queue.filter((p) => p.forItemId === itemId);
+  return mine.length ? mine[mine.length - 1] : null;
 }
 
 /** The queue without one photo (sent or refused), keeping the order of the rest. */

@@ -19,6 +19,7 @@ export const BASIS_POINTS = 10_000;
 /** n ÷ d rounded half away from zero, exactly, for BigInt n and d > 0. */
 export function divRoundHalfAway(n: bigint, d: bigint): bigint {
   if (d <= BigInt(0)) throw new Error("divisor must be positive");
+  // Stryker disable next-line EqualityOperator: at n = 0 both signs give 0n (BigInt has no negative zero)
   const neg = n < BigInt(0);
   const a = neg ? -n : n;
   const q = (a * BigInt(2) + d) / (d * BigInt(2));
@@ -86,7 +87,8 @@ export function splitByWeights(total: number, weights: number[]): number[] {
   const floors = weights.map((w) => (T * BigInt(w)) / S);
   const rems = weights.map((w, i) => ({ i, r: T * BigInt(w) - floors[i] * S }));
   let left = Number(T - floors.reduce((s, f) => s + f, BigInt(0)));
-  rems.sort((a, b) => (a.r === b.r ? a.i - b.i : a.r > b.r ? -1 : 1));
+  // Ties keep the earlier part first: the sort is stable and rems is built in index order.
+  rems.sort(largerRemainderFirst);
   const parts = floors.map(Number);
   for (const { i } of rems) {
     if (left <= 0) break;
@@ -94,6 +96,13 @@ export function splitByWeights(total: number, weights: number[]): number[] {
     left -= 1;
   }
   return parts;
+}
+
+function largerRemainderFirst(a: { r: bigint }, b: { r: bigint }): number {
+  if (a.r > b.r) return -1;
+  // Stryker disable next-line ConditionalExpression,EqualityOperator: Node's sort moves a part ahead only on a −1 (above), so 1 and 0 here order alike
+  if (a.r < b.r) return 1;
+  return 0;
 }
 
 /** Major-unit text ("12.50") to minor units; null when it isn't a plain non-negative amount. */

@@ -34,7 +34,6 @@ export function splitSchedule(total: number, s: ScheduleShares): Record<Instalme
   const problem = checkShares(s);
   if (problem) throw new AmountError(problem);
   const balanceBp = BASIS_POINTS - s.depositBp - s.progressBp;
-  if (total === 0) return { deposit: 0, progress: 0, balance: 0 };
   const [deposit, progress, balance] = splitByWeights(total, [s.depositBp, s.progressBp, balanceBp]);
   return { deposit, progress, balance };
 }

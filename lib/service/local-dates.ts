@@ -1,5 +1,5 @@
 /**
- * Calendar dates in the company's own time zone. A date is kept as "YYYY-MM-DD" (the shape of a
+ * Calendar dates and wall-clock times in the company's own time zone, with nothing but Intl. A date is kept as "YYYY-MM-DD" (the shape of a
  * Postgres `date`), and arithmetic on it is done at UTC midnight, where every day has 24 hours, so
  * adding days never slips across a daylight-saving change.
  */
@@ -46,20 +46,37 @@ export function localDay(instant: Date, timeZone: string): Ymd {
   return wallClock(instant, timeZone).day;
 }
 
+/** The wall-clock time ("HH:MM") an instant shows in `timeZone`. */
+export function localTime(instant: Date, timeZone: string): string {
+  const w = wallClock(instant, timeZone);
+  return `${String(w.hour).padStart(2, "0")}:${String(w.minute).padStart(2, "0")}`;
+}
+
+/** Milliseconds `timeZone` is ahead of UTC at that instant. */
+export function zoneOffsetMs(instant: Date, timeZone: string): number {
+  const w = wallClock(instant, timeZone);
+  const shown = toUtcMs(w.day) + w.hour * 3_600_000 + w.minute * 60_000 + w.second * 1000;
+  return shown - Math.floor(instant.getTime() / 1000) * 1000;
+}
+
 /**
- * The instant when the clocks in `timeZone` read `day` at `hour`:00. Noon is the safe hour for a
- * date entered without a time: it is the same calendar date in every zone from UTC−12 to UTC+14.
+ * The instant the clocks in `timeZone` read `time` ("09:00") on `day`. A time skipped by a
+ * spring-forward change (02:30 on the night clocks jump from 02:00 to 03:00) comes out one hour
+ * later, as a wall clock would show; a time met twice in autumn takes the first. Noon ("12:00") is
+ * the safe time for a date entered without one: it is the same calendar date in every zone from
+ * UTC−12 to UTC+14.
  */
-export function zonedInstant(day: Ymd, timeZone: string, hour = 12): Date {
-  const guess = toUtcMs(day) + hour * 3_600_000;
-  // The zone's offset at the guess, applied once and checked once (enough except inside a DST gap).
-  let at = guess;
-  for (let i = 0; i < 2; i++) {
-    const w = wallClock(new Date(at), timeZone);
-    const shown = toUtcMs(w.day) + w.hour * 3_600_000 + w.minute * 60_000 + w.second * 1000;
-    at += guess - shown;
-  }
-  return new Date(at);
+export function zonedInstant(day: Ymd, time: string, timeZone: string): Date {
+  const [hh, mm] = time.split(":").map(Number);
+  const wall = toUtcMs(day) + hh * 3_600_000 + mm * 60_000;
+  // The offsets a day either side cover any one change; a real zone never changes twice in two days.
+  const before = wall - zoneOffsetMs(new Date(wall - DAY_MS), timeZone);
+  const after = wall - zoneOffsetMs(new Date(wall + DAY_MS), timeZone);
+  const shows = (t: number) => t + zoneOffsetMs(new Date(t), timeZone) === wall;
+  const valid = [before, after].filter(shows);
+  if (valid.length) return new Date(Math.min(...valid));
+  // In the gap: read on the old offset, which lands after the jump.
+  return new Date(before);
 }
 
 /** The Monday on or before `day` (weeks run Monday to Sunday). */

@@ -1,5 +1,5 @@
 import * as rrulePkg from "rrule";
-import { addDays, localDate, zonedInstant } from "./time-zone";
+import { addDays, localDay, zonedInstant } from "./local-dates";
 
 /**
  * Service-visit recurrence. The rule is an RFC 5545 RRULE body; rrule computes it on "floating"
@@ -94,8 +94,8 @@ export function occurrencesBetween(plan: PlanTiming, from: Date, to: Date): Occu
   const options = RRule.parseString(plan.rule);
   const rule = new RRule({ ...options, dtstart: floating(seriesStart(plan.rule, plan.startsOn)) });
   // A day either side: a local date can start before `from` in UTC terms or after `to`.
-  const firstDay = addDays(localDate(from, plan.timeZone), -1);
-  const lastDay = addDays(localDate(to, plan.timeZone), 1);
+  const firstDay = addDays(localDay(from, plan.timeZone), -1);
+  const lastDay = addDays(localDay(to, plan.timeZone), 1);
   const out: Occurrence[] = [];
   for (const day of rule.between(floating(firstDay), floating(lastDay), true)) {
     const occurrenceOn = day.toISOString().slice(0, 10);

@@ -25,6 +25,7 @@ export function bioloadRule(water: WaterKind): string {
 }
 
 export function estimateBioload(lines: PlanLine[], tank: TankFacts): BioloadEstimate | null {
+  // Stryker disable next-line ConditionalExpression: null <= 0 holds in JS, so the next test turns a missing volume away too
   if (tank.netVolumeL == null || tank.netVolumeL <= 0 || !tank.water) return null;
   const fishCm = groupBySpecies(lines).reduce((sum, g) => sum + (g.count * g.species.adultLengthMm) / 10, 0);
   const allowanceCm = tank.netVolumeL / LITRES_PER_CM[tank.water];

@@ -52,6 +52,7 @@ export function groupBySpecies(lines: PlanLine[]): Grouped[] {
 
 function pairs<T>(items: T[]): [T, T][] {
   const out: [T, T][] = [];
+  // Stryker disable next-line EqualityOperator: at i = length the inner loop starts past the end and adds nothing
   for (let i = 0; i < items.length; i++) for (let j = i + 1; j < items.length; j++) out.push([items[i], items[j]]);
   return out;
 }
@@ -135,8 +136,9 @@ export function checkLength(lines: PlanLine[], tank: TankFacts): StockingWarning
 export function checkTemperament(lines: PlanLine[]): StockingWarning[] {
   const out: StockingWarning[] = [];
   for (const [a, b] of pairs(groupBySpecies(lines))) {
-    const [bully, meek] = a.species.temperament === "aggressive" && b.species.temperament === "peaceful" ? [a, b] : b.species.temperament === "aggressive" && a.species.temperament === "peaceful" ? [b, a] : [null, null];
-    if (!bully || !meek) continue;
+    const pair = a.species.temperament === "aggressive" && b.species.temperament === "peaceful" ? [a, b] : b.species.temperament === "aggressive" && a.species.temperament === "peaceful" ? [b, a] : null;
+    if (!pair) continue;
+    const [bully, meek] = pair;
     out.push({
       rule: "temperament",
       key: pairKey("temperament", a.species, b.species),
@@ -178,7 +180,7 @@ export function checkPredation(lines: PlanLine[]): StockingWarning[] {
 /** A shoaling species planned below its comfortable group size (counting every batch). */
 export function checkShoaling(lines: PlanLine[]): StockingWarning[] {
   return groupBySpecies(lines)
-    .filter((g) => g.species.shoalMin > 1 && g.count < g.species.shoalMin)
+    .filter((g) => g.count < g.species.shoalMin)
     .map(({ species: s, count }) => ({
       rule: "shoaling",
       key: `shoaling:${s.id}`,

@@ -18,7 +18,8 @@ const TEMPERAMENT_WORDS: Record<Temperament, string> = {
 };
 
 export function fishCountWords(n: number): string {
-  return n === 1 ? "1 fish" : `${n} fish`;
+  // "Fish" is its own plural.
+  return `${n} fish`;
 }
 
 /** One sentence about a group, e.g. "6 Neon tetras in your tank: a calm fish that swims in open water." */

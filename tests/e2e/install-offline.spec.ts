@@ -3,7 +3,7 @@ import { expect, test } from "@playwright/test";
 import { and, eq } from "drizzle-orm";
 import sharp from "sharp";
 import { db } from "@/db";
-import { attachments } from "@/db/schema";
+import { attachments, checklistItems, checklistTicks } from "@/db/schema";
 import { makeTeam, PASSWORD } from "../support/fixtures";
 import { ready, signIn } from "../pages/sign-in-page";
 
@@ -86,4 +86,57 @@ test("install day on a phone: HEIC and JPEG photos, a photo taken without signal
   await expect(page).toHaveURL(/\/sign-in/);
   const keys = await page.evaluate(() => caches.keys());
   expect(keys).not.toContain("tankwright-pages-v1");
+});
+
+test("a checklist item's photo taken without signal: the tick waits for the photo, survives a reload, and each reaches the server once", async ({ page, context }) => {
+  const t = await makeTeam("aquascape");
+  await signIn(page, t.crew.email, PASSWORD);
+  await expect(page).toHaveURL(/\/board$/);
+  await page.goto(`/projects/${t.project.id}/install`);
+  await ready(page);
+  await expect(page.locator("html[data-offline-ready=true]")).toHaveCount(1, { timeout: 30_000 });
+
+  const label = "Photo of the finished aquascape";
+  const scape = page.locator(`[data-testid="checklist-item"][data-item="${label}"]`);
+  await context.setOffline(true);
+  const jpeg = await sharp({ create: { width: 300, height: 200, channels: 3, background: "#3d5c4f" } }).jpeg().toBuffer();
+  await scape.locator('input[type="file"]').setInputFiles({ name: "scape basement.jpg", mimeType: "image/jpeg", buffer: jpeg });
+  await expect(scape.getByTestId("item-photo")).toHaveAttribute("data-state", "waiting");
+  await expect(scape.getByTestId("item-photo")).toContainText("Photo kept on this phone: scape basement.jpg");
+  // The photo is the item's, and the day's photo panel counts it as waiting too.
+  await expect(page.getByTestId("waiting-photos")).toContainText("Waiting to send — 1 photo");
+
+  // Marked done with the photo still on the phone: the tick waits for it, shown as not saved.
+  await scape.getByPlaceholder("Note (optional)").fill("rock work settled");
+  await scape.getByRole("button", { name: /Mark done/ }).click();
+  await expect(scape).toHaveAttribute("data-done", "true");
+  await expect(scape.getByTestId("item-status")).toContainText("Not saved yet: waiting for its photo");
+
+  // A reload with no signal keeps both.
+  await page.reload();
+  await ready(page);
+  await expect(page.getByTestId("saved-copy")).toContainText("No signal");
+  await expect(scape.getByTestId("item-status")).toContainText("Not saved yet: waiting for its photo");
+  await expect(page.getByTestId("waiting-photos")).toContainText("Waiting to send — 1 photo");
+
+  // The signal returns: the photo goes, then the tick with the photo's id.
+  await context.setOffline(false);
+  await expect(scape.getByTestId("item-status")).toContainText("Saved", { timeout: 20_000 });
+  await expect(scape.getByTestId("item-status")).toContainText("rock work settled");
+  await expect(scape.getByRole("img", { name: `Taken for: ${label}` })).toBeVisible();
+  await expect(page.getByTestId("waiting-photos")).toHaveCount(0);
+
+  const sent = await db().select().from(attachments).where(eq(attachments.projectId, t.project.id));
+  expect(sent).toHaveLength(1);
+  expect(sent[0].caption).toBe(label);
+  const [scapeItem] = await db().select().from(checklistItems).where(eq(checklistItems.label, label));
+  const ticks = await db()
+    .select()
+    .from(checklistTicks)
+    .where(and(eq(checklistTicks.projectId, t.project.id), eq(checklistTicks.itemId, scapeItem.id)));
+  expect(ticks).toHaveLength(1);
+  expect(ticks[0].done).toBe(true);
+  expect(ticks[0].attachmentId).toBe(sent[0].id);
+  expect(ticks[0].note).toBe("rock work settled");
+  expect(ticks[0].clientKey).toBe(`t-${sent[0].clientKey}`);
 });

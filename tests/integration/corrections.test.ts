@@ -75,6 +75,40 @@ describe("visits", () => {
   });
 });
 
+describe("the target install date and the booked install day", () => {
+  it("a new target date moves the install day still ahead, at the same time of day; clearing it while booked is refused", async () => {
+    const t = await makeTeam("stand_load_check");
+    const lead = await signedIn(t.lead);
+    const booked = await lead.post(`/api/projects/${t.project.id}/visits`, { kind: "install day", startsAt: "2031-03-10T09:00:00Z", durationMinutes: 480 });
+    expect(booked.status).toBe(201);
+    const version = () => getProject(t.project.id).then((p) => p.version);
+
+    const changed = await lead.request("PATCH", `/api/projects/${t.project.id}`, { version: await version(), targetInstallDate: "2031-03-24" });
+    expect(changed.status).toBe(200);
+    expect(changed.json.movedInstallVisits).toBe(1);
+    expect((await getProject(t.project.id)).targetInstallDate).toBe("2031-03-24");
+    const [visit] = await db().select().from(visits).where(eq(visits.id, booked.json.visit.id));
+    expect(visit.startsAt.toISOString()).toBe("2031-03-24T09:00:00.000Z");
+
+    // Clearing the date would leave the booked day without one: refused, nothing changed.
+    const before = await version();
+    const cleared = await lead.request("PATCH", `/api/projects/${t.project.id}`, { version: before, targetInstallDate: "" });
+    expect(cleared.status).toBe(422);
+    expect(cleared.json.error).toContain("An install day is booked for this project");
+    expect(await getProject(t.project.id)).toMatchObject({ targetInstallDate: "2031-03-24", version: before });
+
+    // Once the visit is cancelled the date can be cleared, and a cancelled visit never moves.
+    expect((await lead.post(`/api/projects/${t.project.id}/visits/${visit.id}/cancel`, { reason: "Client postponed" })).status).toBe(200);
+    const clearedNow = await lead.request("PATCH", `/api/projects/${t.project.id}`, { version: before, targetInstallDate: "" });
+    expect(clearedNow.status).toBe(200);
+    expect(clearedNow.json.movedInstallVisits).toBe(0);
+    const again = await lead.request("PATCH", `/api/projects/${t.project.id}`, { version: await version(), targetInstallDate: "2031-05-01" });
+    expect(again.json.movedInstallVisits).toBe(0);
+    const [still] = await db().select().from(visits).where(eq(visits.id, visit.id));
+    expect(still.startsAt.toISOString()).toBe("2031-03-24T09:00:00.000Z");
+  });
+});
+
 describe("crew taking back a mis-tap", () => {
   it("undoes their own tick inside the window, but not someone else's or an old one", async () => {
     const t = await makeTeam("aquascape");

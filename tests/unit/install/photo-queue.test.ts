@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { newPhotoKey, parsePhotoQueue, photoQueueKey, plausibleTakenAt, sendOutcome, shrinkPlan, waitingPhotosLabel, withoutPhoto, type QueuedPhoto } from "@/lib/install/photo-queue";
+import { holdTick, newPhotoKey, parsePhotoQueue, tickKeyForPhoto, waitingPhotoFor, photoQueueKey, plausibleTakenAt, sendOutcome, shrinkPlan, waitingPhotosLabel, withoutPhoto, type QueuedPhoto } from "@/lib/install/photo-queue";
 
 const photo = (clientKey: string, extra: Partial<QueuedPhoto> = {}): QueuedPhoto & { bytes: string } => ({
   clientKey,
@@ -92,5 +92,47 @@ describe("labels and keys", () => {
     const a = newPhotoKey();
     expect(a).toMatch(/^p-[0-9a-f]{32}$/);
     expect(newPhotoKey()).not.toBe(a);
+  });
+});
+
+describe("a checklist item's photo and the tick that waits for it", () => {
+  const held = { itemId: "item-1", note: "level both ways", value: null, heldAt: "2026-12-02T10:45:00.000Z" };
+  const hasBytes = (p: Record<string, unknown>) => typeof p.bytes === "string";
+
+  it("holds the tick on the photo it needs, leaving the others alone", () => {
+    const q = [photo("p-aaaaaaaaaaaa"), photo("p-bbbbbbbbbbbb", { forItemId: "item-1" })];
+    const next = holdTick(q, "p-bbbbbbbbbbbb", held);
+    expect(next?.[1]).toMatchObject({ clientKey: "p-bbbbbbbbbbbb", forItemId: "item-1", thenTick: held });
+    expect(next?.[0]).toEqual(q[0]);
+    expect(q[1].thenTick).toBeUndefined();
+  });
+  it("can't hold a tick on a photo that has left the queue", () => {
+    expect(holdTick([photo("p-aaaaaaaaaaaa")], "p-bbbbbbbbbbbb", held)).toBeNull();
+    expect(holdTick([], "p-bbbbbbbbbbbb", held)).toBeNull();
+  });
+  it("finds the newest photo still waiting for an item, and none for another item", () => {
+    const q = [photo("p-aaaaaaaaaaaa", { forItemId: "item-1" }), photo("p-bbbbbbbbbbbb"), photo("p-cccccccccccc", { forItemId: "item-1" })];
+    expect(waitingPhotoFor(q, "item-1")?.clientKey).toBe("p-cccccccccccc");
+    expect(waitingPhotoFor(q, "item-2")).toBeNull();
+    expect(waitingPhotoFor([photo("p-aaaaaaaaaaaa")], "item-1")).toBeNull();
+  });
+  it("gives the following tick one key per photo, so a photo sent twice ticks once", () => {
+    expect(tickKeyForPhoto("p-aaaaaaaaaaaa")).toBe("t-p-aaaaaaaaaaaa");
+    expect(tickKeyForPhoto("p-aaaaaaaaaaaa")).toBe(tickKeyForPhoto("p-aaaaaaaaaaaa"));
+    expect(tickKeyForPhoto("p-bbbbbbbbbbbb")).not.toBe(tickKeyForPhoto("p-aaaaaaaaaaaa"));
+    // The tick route wants 8–100 characters.
+    expect(tickKeyForPhoto(newPhotoKey()).length).toBeLessThanOrEqual(100);
+  });
+  it("reads a held tick back from storage, and drops a malformed one without losing the photo", () => {
+    const good = photo("p-aaaaaaaaaaaa", { forItemId: "item-1", thenTick: held });
+    const badTick = { ...photo("p-bbbbbbbbbbbb", { forItemId: "item-2" }), thenTick: { itemId: 4 } };
+    const badValue = { ...photo("p-cccccccccccc", { forItemId: "item-3" }), thenTick: { ...held, value: Number.NaN } };
+    const badItem = { ...photo("p-dddddddddddd"), forItemId: 12 };
+    const read = parsePhotoQueue([good, badTick, badValue, badItem], hasBytes);
+    expect(read.map((p) => p.clientKey)).toEqual(["p-aaaaaaaaaaaa", "p-bbbbbbbbbbbb", "p-cccccccccccc"]);
+    expect(read[0].thenTick).toEqual(held);
+    expect(read[1].thenTick).toBeNull();
+    expect(read[2].thenTick).toBeNull();
+    expect(parsePhotoQueue([{ ...good, thenTick: { ...held, value: 2.5, note: null } }], hasBytes)[0].thenTick).toEqual({ ...held, value: 2.5, note: null });
   });
 });

@@ -23,11 +23,11 @@ describe("days in the company's time zone", () => {
   });
 
   it("find noon local time, across a daylight-saving change", () => {
-    expect(zonedInstant("2026-12-02", "UTC").toISOString()).toBe("2026-12-02T12:00:00.000Z");
-    expect(zonedInstant("2026-07-01", "Europe/Berlin").toISOString()).toBe("2026-07-01T10:00:00.000Z"); // UTC+2 in summer (from memory)
-    expect(zonedInstant("2026-03-29", "Europe/Berlin").toISOString()).toBe("2026-03-29T10:00:00.000Z"); // the day clocks go forward
-    expect(localDay(zonedInstant("2026-06-15", "Pacific/Kiritimati"), "Pacific/Kiritimati")).toBe("2026-06-15");
-    expect(localDay(zonedInstant("2026-06-15", "Etc/GMT+12"), "Etc/GMT+12")).toBe("2026-06-15");
+    expect(zonedInstant("2026-12-02", "12:00", "UTC").toISOString()).toBe("2026-12-02T12:00:00.000Z");
+    expect(zonedInstant("2026-07-01", "12:00", "Europe/Berlin").toISOString()).toBe("2026-07-01T10:00:00.000Z"); // UTC+2 in summer (from memory)
+    expect(zonedInstant("2026-03-29", "12:00", "Europe/Berlin").toISOString()).toBe("2026-03-29T10:00:00.000Z"); // the day clocks go forward
+    expect(localDay(zonedInstant("2026-06-15", "12:00", "Pacific/Kiritimati"), "Pacific/Kiritimati")).toBe("2026-06-15");
+    expect(localDay(zonedInstant("2026-06-15", "12:00", "Etc/GMT+12"), "Etc/GMT+12")).toBe("2026-06-15");
   });
 
   it("count days by the calendar, not by 24-hour steps", () => {

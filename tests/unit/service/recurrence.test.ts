@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { describeRecurrence, occurrencesBetween, parseRule, ruleBody, type Recurrence } from "@/lib/service/recurrence";
-import { localTime, zonedInstant } from "@/lib/service/time-zone";
+import { localTime, zonedInstant } from "@/lib/service/local-dates";
 
 const days = (list: { occurrenceOn: string }[]) => list.map((o) => o.occurrenceOn);
 

@@ -9,5 +9,5 @@ export const GET = projectRoute({ action: "view_internal" }, async ({ project })
 /** Changes a project's details (lead only), guarded by the card's version. */
 export const PATCH = projectRoute({ action: "edit_details", schema: projectDetailsSchema }, async ({ input, project }) => {
   const updated = await updateProjectDetails(project.id, input);
-  return NextResponse.json({ id: updated.id, version: updated.version });
+  return NextResponse.json({ id: updated.id, version: updated.version, movedInstallVisits: updated.movedInstallVisits });
 });

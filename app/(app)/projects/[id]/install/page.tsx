@@ -15,6 +15,7 @@ import { ChecklistDay } from "./_components/checklist-day";
 import { MaterialsPanel } from "./_components/materials-panel";
 import { FillPanel } from "./_components/fill-panel";
 import { DayPhotos } from "./_components/day-photos";
+import { PhotoQueueProvider } from "./_components/photo-queue-context";
 import type { DayState } from "./_components/checklist-types";
 
 export const generateMetadata = ({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> => projectSectionTitle(params, "Install day");
@@ -76,6 +77,7 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
         protection (RCD/GFCI). Wiring near water is for a licensed electrician under local codes. Lift glass with enough people
         for its weight; never slide a tank on its base.
       </Caution>
+      <PhotoQueueProvider userId={user.id} projectId={project.id}>
       {dayItems.length ? (
         <ChecklistDay
           projectId={project.id}
@@ -87,13 +89,8 @@ export default async function InstallDayPage({ params }: { params: Promise<{ id:
       ) : (
         <EmptyState title="No checklist items yet">The lead adds them on the Checklists page.</EmptyState>
       )}
-      <DayPhotos
-        projectId={project.id}
-        userId={user.id}
-        stages={DAY_STAGES}
-        defaultStage={DAY_STAGES.includes(project.stage) ? project.stage : "aquascape"}
-        initial={dayPhotos}
-      />
+      <DayPhotos stages={DAY_STAGES} defaultStage={DAY_STAGES.includes(project.stage) ? project.stage : "aquascape"} initial={dayPhotos} />
+      </PhotoQueueProvider>
       <div className="grid items-start gap-8 lg:grid-cols-2">
       <MaterialsPanel
         projectId={project.id}

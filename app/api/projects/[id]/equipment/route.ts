@@ -14,6 +14,6 @@ export const GET = projectRoute({ action: "view" }, async ({ project, relation }
 export const POST = projectRoute({ action: "edit_equipment", schema: newEquipmentSchema }, async ({ input, project, user }) => {
   const { timeZone } = await getServiceSettings();
   const values = pieceValues(input, localDay(new Date(), timeZone));
-  const piece = await addEquipment({ projectId: project.id, values, lastServicedAt: input.lastServicedOn ? zonedInstant(input.lastServicedOn, timeZone) : null, by: user.id });
+  const piece = await addEquipment({ projectId: project.id, values, lastServicedAt: input.lastServicedOn ? zonedInstant(input.lastServicedOn, "12:00", timeZone) : null, by: user.id });
   return NextResponse.json({ piece }, { status: 201 });
 });

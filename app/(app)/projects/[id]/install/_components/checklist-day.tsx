@@ -1,12 +1,15 @@
 "use client";
-import { useCallback, useEffect, useState } from "react";
+import { useCallback, useEffect, useRef, useState } from "react";
 import { STAGE_LABELS, type Stage } from "@/lib/stages/stages";
 import { percent } from "@/lib/install/checklist-progress";
 import { pendingLabel, type QueuedTick } from "@/lib/install/tick-queue";
+import { tickKeyForPhoto } from "@/lib/install/photo-queue";
 import { buttonStyles } from "@/components/ui/button-styles";
-import { useTickQueue } from "./use-tick-queue";
+import { useTickQueue } from "@/components/offline/use-tick-queue";
+import { WaitingStrip } from "@/components/offline/waiting-strip";
 import { ChecklistItemRow } from "./checklist-item-row";
-import type { DayItem, DayState } from "./checklist-types";
+import { usePhotoQueueContext } from "./photo-queue-context";
+import type { DayItem, DayState, ItemSubmit } from "./checklist-types";
 
 type Props = {
   projectId: string;
@@ -40,6 +43,50 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
 
   const { queue, enqueue, retryNow, lastError } = useTickQueue(projectId, { onSaved, onRefused });
 
+  const { queue: photos, holdTick, listen } = usePhotoQueueContext();
+  // Photo key → the server's id, for a "Mark done" pressed just after its photo left the queue.
+  const sentPhotoIds = useRef(new Map<string, string>());
+
+  // A tick held on a photo follows it as soon as the server has the photo, under a key made from the
+  // photo's, so sending the photo twice can't tick twice.
+  useEffect(
+    () =>
+      listen((o) => {
+        const { entry } = o;
+        if (!entry.forItemId) return;
+        if (o.kind === "sent") sentPhotoIds.current.set(entry.clientKey, o.photo.id);
+        const held = entry.thenTick;
+        if (!held) return;
+        if (o.kind === "sent") {
+          const q = enqueue({ itemId: held.itemId, done: true, note: held.note, value: held.value, attachmentId: o.photo.id, clientKey: tickKeyForPhoto(entry.clientKey) });
+          setStates((s) => ({ ...s, [held.itemId]: { done: true, note: held.note, value: held.value, attachmentId: o.photo.id, byName: me.name, mine: true, at: q.queuedAt, pending: true } }));
+        } else {
+          setRefusals((r) => ({ ...r, [held.itemId]: `Not saved: the photo was refused. ${o.message} Take it again.` }));
+          setStates((s) => {
+            const next = { ...s };
+            if (confirmed[held.itemId]) next[held.itemId] = confirmed[held.itemId];
+            else delete next[held.itemId];
+            return next;
+          });
+        }
+      }),
+    [listen, enqueue, me.name, confirmed],
+  );
+
+  // Ticks held on photos still on this phone show as pending, waiting for the photo.
+  useEffect(() => {
+    const held = photos.filter((p) => p.thenTick);
+    if (!held.length) return;
+    // eslint-disable-next-line react-hooks/set-state-in-effect -- the photo queue comes from IndexedDB after mount
+    setStates((s) => {
+      const next = { ...s };
+      for (const { thenTick: t } of held) {
+        if (t && !next[t.itemId]?.pending) next[t.itemId] = { done: true, note: t.note, value: t.value, attachmentId: null, byName: me.name, mine: true, at: t.heldAt, pending: true, waitingForPhoto: true };
+      }
+      return next;
+    });
+  }, [photos, me.name]);
+
   // Ticks left on this phone from an earlier visit show as pending until they are sent.
   useEffect(() => {
     if (!queue.length) return;
@@ -53,11 +100,24 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
     });
   }, [queue, me.name]);
 
-  function submit(itemId: string, t: { done: boolean; note: string | null; value: number | null; attachmentId: string | null }) {
+  function submit(itemId: string, { photoKey, ...t }: Parameters<ItemSubmit>[0]) {
     setRefusals((r) => {
       const { [itemId]: _gone, ...rest } = r;
       return rest;
     });
+    if (photoKey && !t.attachmentId) {
+      const sentId = sentPhotoIds.current.get(photoKey);
+      if (!sentId) {
+        const heldAt = new Date().toISOString();
+        if (holdTick(photoKey, { itemId, note: t.note, value: t.value, heldAt })) {
+          setStates((s) => ({ ...s, [itemId]: { ...t, byName: me.name, mine: true, at: heldAt, pending: true, waitingForPhoto: true } }));
+        } else {
+          setRefusals((r) => ({ ...r, [itemId]: "Not saved: the photo wasn't sent. Take it again." }));
+        }
+        return;
+      }
+      t = { ...t, attachmentId: sentId };
+    }
     const q = enqueue({ itemId, ...t });
     setStates((s) => ({ ...s, [itemId]: { ...t, byName: me.name, mine: true, at: q.queuedAt, pending: true } }));
   }
@@ -66,13 +126,7 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
     // Phone first, one column; a desktop uses its width with a column per stage.
     <div className="grid items-start gap-6 lg:grid-cols-2 2xl:grid-cols-3" data-testid="checklist-columns">
       {queue.length > 0 && (
-        <div role="status" data-testid="pending-ticks" className="sticky top-14 z-20 col-span-full flex flex-wrap items-center gap-3 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm">
-          <span className="font-semibold text-caution">{pendingLabel(queue.length)}</span>
-          <span className="text-ink/80">{lastError ?? "Sending…"}</span>
-          <button type="button" onClick={retryNow} className={`${buttonStyles.secondary} ml-auto min-h-11`}>
-            Try now
-          </button>
-        </div>
+        <WaitingStrip testId="pending-ticks" sticky label={pendingLabel(queue.length)} reason={lastError} onRetry={retryNow} />
       )}
       {stages.map((stage) => {
         const list = items.filter((i) => i.stage === stage);

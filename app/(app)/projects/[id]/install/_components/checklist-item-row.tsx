@@ -1,22 +1,47 @@
 "use client";
-import { useId, useState } from "react";
+import { useEffect, useId, useState } from "react";
 import { format } from "date-fns";
 import { checkMeasuredValue } from "@/lib/install/checklist-progress";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
-import { UploadButton, type UploadedFile } from "@/components/ui/upload-button";
+import { PHOTO_ACCEPT } from "@/lib/install/upload-rules";
+import { waitingPhotoFor } from "@/lib/install/photo-queue";
 import { ItemHistory } from "./item-history";
-import type { DayItem, DayState } from "./checklist-types";
+import { usePhotoQueueContext } from "./photo-queue-context";
+import type { DayItem, DayState, ItemSubmit } from "./checklist-types";
 import { UNDO_WINDOW_MINUTES, canUndoOwn, undoDeadline } from "@/lib/install/undo-window";
 
-type Submit = (t: { done: boolean; note: string | null; value: number | null; attachmentId: string | null }) => void;
-
 /** One checklist item: tick it (with a value or photo where asked), or, for the lead, untick with a reason. */
-export function ChecklistItemRow({ projectId, item, state, refusal, isLead, onSubmit }: { projectId: string; item: DayItem; state: DayState | null; refusal: string | null; isLead: boolean; onSubmit: Submit }) {
+export function ChecklistItemRow({ projectId, item, state, refusal, isLead, onSubmit }: { projectId: string; item: DayItem; state: DayState | null; refusal: string | null; isLead: boolean; onSubmit: ItemSubmit }) {
   const id = useId();
   const [note, setNote] = useState("");
   const [value, setValue] = useState("");
-  const [photo, setPhoto] = useState<UploadedFile | null>(null);
+  // The item's photo goes through the page's photo queue: kept on the phone, sent when there is signal.
+  const { queue: photos, add, listen } = usePhotoQueueContext();
+  const waiting = waitingPhotoFor(photos, item.id);
+  const [photo, setPhoto] = useState<{ id: string; fileName: string } | null>(null);
+  const [keeping, setKeeping] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  useEffect(
+    () =>
+      listen((o) => {
+        if (o.entry.forItemId !== item.id) return;
+        if (o.kind === "sent") setPhoto({ id: o.photo.id, fileName: o.photo.fileName });
+        else if (!o.entry.thenTick) setError(`The photo wasn't accepted: ${o.message}`);
+      }),
+    [listen, item.id],
+  );
+
+  async function takePhoto(file: File) {
+    setError(null);
+    setKeeping(true);
+    try {
+      await add(file, item.stage, item.label, item.id);
+    } catch {
+      setError("This phone couldn't read that photo. Try taking it again.");
+    } finally {
+      setKeeping(false);
+    }
+  }
   const [unticking, setUnticking] = useState(false);
   const [showHistory, setShowHistory] = useState(false);
   const done = state?.done === true;
@@ -29,8 +54,8 @@ export function ChecklistItemRow({ projectId, item, state, refusal, isLead, onSu
       const problem = checkMeasuredValue(item.measure, measured);
       if (problem) return setError(problem);
     }
-    if (item.needsPhoto && !photo) return setError("Attach a photo first: this item needs one.");
-    onSubmit({ done: true, note: note.trim() || null, value: measured, attachmentId: photo?.id ?? null });
+    if (item.needsPhoto && !photo && !waiting) return setError("Attach a photo first: this item needs one.");
+    onSubmit({ done: true, note: note.trim() || null, value: measured, attachmentId: photo?.id ?? null, photoKey: photo ? null : (waiting?.clientKey ?? null) });
     setNote("");
   }
 
@@ -63,7 +88,7 @@ export function ChecklistItemRow({ projectId, item, state, refusal, isLead, onSu
           {state && (
             <p className="text-sm" data-testid="item-status">
               {state.pending ? (
-                <span className="rounded bg-caution-soft px-1.5 py-0.5 text-xs font-semibold text-caution">Not saved yet</span>
+                <span className="rounded bg-caution-soft px-1.5 py-0.5 text-xs font-semibold text-caution">{state.waitingForPhoto ? "Not saved yet: waiting for its photo" : "Not saved yet"}</span>
               ) : (
                 <span className="text-xs font-semibold text-ok">Saved</span>
               )}{" "}
@@ -95,9 +120,31 @@ export function ChecklistItemRow({ projectId, item, state, refusal, isLead, onSu
           )}
           {item.needsPhoto &&
             (photo ? (
-              <p className="text-sm text-ok">Photo attached: {photo.fileName}</p>
+              <p className="text-sm text-ok" data-testid="item-photo" data-state="sent">
+                Photo attached: {photo.fileName}
+              </p>
+            ) : waiting ? (
+              <p className="text-sm" data-testid="item-photo" data-state="waiting">
+                <span className="rounded bg-caution-soft px-1.5 py-0.5 text-xs font-semibold text-caution">Waiting to send</span> Photo kept on this phone: {waiting.fileName}
+              </p>
             ) : (
-              <UploadButton projectId={projectId} stage={item.stage} caption={item.label} label="Attach a photo" onUploaded={setPhoto} />
+              <div>
+                <label htmlFor={`${id}-photo`} className={`${buttonStyles.secondary} min-h-11 cursor-pointer ${keeping ? "opacity-50" : ""}`}>
+                  {keeping ? "Keeping it…" : "Attach a photo"}
+                </label>
+                <input
+                  id={`${id}-photo`}
+                  type="file"
+                  accept={PHOTO_ACCEPT}
+                  className="sr-only"
+                  disabled={keeping}
+                  onChange={(e) => {
+                    const input = e.currentTarget;
+                    const f = input.files?.[0];
+                    if (f) void takePhoto(f).finally(() => (input.value = ""));
+                  }}
+                />
+              </div>
             ))}
           <label htmlFor={`${id}-note`} className="sr-only">
             Note for {item.label} (optional)

@@ -14,4 +14,9 @@ export type DayState = {
   mine?: boolean;
   at: string;
   pending?: boolean;
+  /** Held on this phone until the photo it needs has been sent. */
+  waitingForPhoto?: boolean;
 };
+
+/** What a row hands up: a tick, with the key of a photo still on the phone when it has no id yet. */
+export type ItemSubmit = (t: { done: boolean; note: string | null; value: number | null; attachmentId: string | null; photoKey?: string | null }) => void;

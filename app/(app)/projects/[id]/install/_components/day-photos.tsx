@@ -4,23 +4,30 @@ import { STAGE_LABELS, type Stage } from "@/lib/stages/stages";
 import { PHOTO_ACCEPT } from "@/lib/install/upload-rules";
 import { waitingPhotosLabel } from "@/lib/install/photo-queue";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
-import { usePhotoQueue, type SentPhoto } from "./use-photo-queue";
+import { WaitingStrip } from "@/components/offline/waiting-strip";
+import { usePhotoQueueContext } from "./photo-queue-context";
+import type { SentPhoto } from "./use-photo-queue";
 import type { StoredPhoto } from "./photo-store";
 
-type Props = { projectId: string; userId: string; stages: Stage[]; defaultStage: Stage; initial: SentPhoto[] };
+type Props = { stages: Stage[]; defaultStage: Stage; initial: SentPhoto[] };
 
 /**
  * The day's photos. One taken without a signal waits on the phone, shown as waiting, and is sent when
  * the connection returns; sent ones show the server's thumbnail.
  */
-export function DayPhotos({ projectId, userId, stages, defaultStage, initial }: Props) {
+export function DayPhotos({ stages, defaultStage, initial }: Props) {
   const id = useId();
   const [sent, setSent] = useState<SentPhoto[]>(initial);
   const [stage, setStage] = useState<Stage>(defaultStage);
   const [caption, setCaption] = useState("");
   const [busy, setBusy] = useState(false);
-  const { queue, add, retryNow, lastError, refusals, dismissRefusal } = usePhotoQueue(userId, projectId, (p) =>
-    setSent((s) => (s.some((x) => x.id === p.id) ? s : [...s, p])),
+  const { queue, add, retryNow, lastError, refusals, dismissRefusal, listen } = usePhotoQueueContext();
+  useEffect(
+    () =>
+      listen((o) => {
+        if (o.kind === "sent") setSent((s) => (s.some((x) => x.id === o.photo.id) ? s : [...s, o.photo]));
+      }),
+    [listen],
   );
 
   async function pick(files: FileList | null) {
@@ -80,15 +87,7 @@ export function DayPhotos({ projectId, userId, stages, defaultStage, initial }: 
         />
       </div>
 
-      {queue.length > 0 && (
-        <div role="status" data-testid="waiting-photos" className="flex flex-wrap items-center gap-3 rounded-lg border border-caution/40 bg-caution-soft px-3 py-2 text-sm">
-          <span className="font-semibold text-caution">{waitingPhotosLabel(queue.length)}</span>
-          <span className="text-ink/80">{lastError ?? "Sending…"}</span>
-          <button type="button" onClick={retryNow} className={`${buttonStyles.secondary} ml-auto min-h-11`}>
-            Try now
-          </button>
-        </div>
-      )}
+      {queue.length > 0 && <WaitingStrip testId="waiting-photos" label={waitingPhotosLabel(queue.length)} reason={lastError} onRetry={retryNow} />}
       {refusals.map((r) => (
         <p key={r.key} role="alert" className="flex flex-wrap items-center gap-2 text-sm font-medium text-danger">
           Not sent: {r.fileName}. {r.message}

@@ -20,7 +20,7 @@ export const POST = projectRoute<typeof equipmentServiceSchema, undefined, { id:
       projectId: project.id,
       equipmentId,
       servicedOn: input.servicedOn,
-      servicedAt: zonedInstant(input.servicedOn, timeZone),
+      servicedAt: zonedInstant(input.servicedOn, "12:00", timeZone),
       note: input.note,
       by: user.id,
       clientKey: input.clientKey,

@@ -5,7 +5,8 @@ import { sendJson } from "@/lib/http/send-json";
 import { newTickKey, pendingLabel, type QueuedTick } from "@/lib/install/tick-queue";
 import { buttonStyles, inputStyles } from "@/components/ui/button-styles";
 import { UploadButton } from "@/components/ui/upload-button";
-import { useTickQueue } from "@/app/(app)/projects/[id]/install/_components/use-tick-queue";
+import { useTickQueue } from "@/components/offline/use-tick-queue";
+import { WaitingStrip } from "@/components/offline/waiting-strip";
 import type { VisitReportView } from "@/db/queries/visit-reports";
 import { WaterTestPanel } from "./water-test-panel";
 
@@ -94,13 +95,7 @@ export function VisitReportForm({ projectId, report, equipment }: Props) {
   return (
     <div className="flex flex-col gap-4" data-testid="visit-report-form">
       {queue.length > 0 && (
-        <div role="status" data-testid="pending-ticks" className="sticky top-14 z-20 flex flex-wrap items-center gap-3 rounded-xl border border-caution/40 bg-caution-soft px-4 py-3 text-sm">
-          <span className="font-semibold text-caution">{pendingLabel(queue.length)}</span>
-          <span className="text-ink/80">{lastError ?? "Sending…"}</span>
-          <button type="button" onClick={retryNow} className={`${buttonStyles.secondary} ml-auto min-h-11`}>
-            Try now
-          </button>
-        </div>
+        <WaitingStrip testId="pending-ticks" sticky label={pendingLabel(queue.length)} reason={lastError} onRetry={retryNow} />
       )}
       <fieldset className="flex flex-col gap-1 rounded-2xl border border-line bg-card p-4">
         <legend className="px-1 text-sm font-semibold">Tasks</legend>
