@@ -22,6 +22,8 @@ export default defineConfig({
   projects: [
     // The flows write to the shared test database one at a time; the sweeps read the demo beside them.
     { name: "flows", testIgnore: /sweep\.spec\.ts/, workers: 1, use: { ...devices["Desktop Chrome"], channel: undefined } },
-    { name: "sweep", testMatch: /sweep\.spec\.ts/, use: { ...devices["Desktop Chrome"], channel: undefined } },
+    // No trace for the sweeps: a trace of thirty pages costs more than the check, and a sweep's
+    // failure lists each page and finding by itself.
+    { name: "sweep", testMatch: /sweep\.spec\.ts/, use: { ...devices["Desktop Chrome"], channel: undefined, trace: "off" } },
   ],
 });
