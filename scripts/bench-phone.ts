@@ -12,6 +12,7 @@ import { chromium, type BrowserContext } from "@playwright/test";
 import { eq } from "drizzle-orm";
 import { closeDb, db } from "../db";
 import { projects, users } from "../db/schema";
+import { signInCookies } from "./lib/bench-http";
 
 const BASE = process.env.BENCH_DEMO_URL ?? "http://127.0.0.1:3198";
 const PASSWORD = "demo-tank-2026";
@@ -23,25 +24,7 @@ const CPU_SLOWDOWN = 4;
 const RUNS = Number(process.env.BENCH_PHONE_RUNS ?? 3);
 
 async function cookieFor(email: string) {
-  const jar = new Map<string, string>();
-  const keep = (res: Response) => {
-    for (const line of res.headers.getSetCookie()) {
-      const [pair] = line.split(";");
-      const i = pair.indexOf("=");
-      jar.set(pair.slice(0, i), pair.slice(i + 1));
-    }
-  };
-  const csrf = await fetch(`${BASE}/api/auth/csrf`);
-  keep(csrf);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const res = await fetch(`${BASE}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie: [...jar].map(([k, v]) => `${k}=${v}`).join("; ") },
-    body: new URLSearchParams({ csrfToken, email, password: PASSWORD, json: "true" }),
-  });
-  keep(res);
-  if (![...jar.keys()].some((k) => k.includes("session-token"))) throw new Error(`Sign-in as ${email} failed (${res.status}).`);
+  const jar = await signInCookies(BASE, email, PASSWORD);
   const host = new URL(BASE).hostname;
   return [...jar].map(([name, value]) => ({ name, value, domain: host, path: "/" }));
 }

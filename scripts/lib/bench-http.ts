@@ -8,8 +8,11 @@ export const BASE = process.env.BENCH_URL ?? "http://127.0.0.1:3199";
 export const DURATION = Number(process.env.BENCH_SECONDS ?? 10);
 export const LEAD = { email: "bench-lead@bench.test", password: "bench-password-1" };
 
-/** The real sign-in flow: CSRF token, then the credentials callback; returns the cookie header. */
-export async function signIn(): Promise<string> {
+/**
+ * The real sign-in flow (CSRF token, then the credentials callback) against `base`; returns the
+ * cookies it set, by name. The bench lead on the bench app unless told otherwise.
+ */
+export async function signInCookies(base = BASE, email = LEAD.email, password = LEAD.password): Promise<Map<string, string>> {
   const jar = new Map<string, string>();
   const keep = (res: Response) => {
     for (const line of res.headers.getSetCookie()) {
@@ -19,18 +22,23 @@ export async function signIn(): Promise<string> {
     }
   };
   const header = () => [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
-  const csrf = await fetch(`${BASE}/api/auth/csrf`);
+  const csrf = await fetch(`${base}/api/auth/csrf`);
   keep(csrf);
   const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const res = await fetch(`${BASE}/api/auth/callback/credentials`, {
+  const res = await fetch(`${base}/api/auth/callback/credentials`, {
     method: "POST",
     redirect: "manual",
     headers: { "content-type": "application/x-www-form-urlencoded", cookie: header() },
-    body: new URLSearchParams({ csrfToken, email: LEAD.email, password: LEAD.password, json: "true" }),
+    body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
   });
   keep(res);
-  if (![...jar.keys()].some((k) => k.includes("session-token"))) throw new Error(`Sign-in failed (${res.status}).`);
-  return header();
+  if (![...jar.keys()].some((k) => k.includes("session-token"))) throw new Error(`Sign-in as ${email} failed (${res.status}).`);
+  return jar;
+}
+
+/** The bench lead's cookie header. */
+export async function signIn(): Promise<string> {
+  return [...(await signInCookies())].map(([k, v]) => `${k}=${v}`).join("; ");
 }
 
 const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
