@@ -4,7 +4,6 @@ import { STAGE_LABELS, type Stage } from "@/lib/stages/stages";
 import { percent } from "@/lib/install/checklist-progress";
 import { pendingLabel, type QueuedTick } from "@/lib/install/tick-queue";
 import { tickKeyForPhoto } from "@/lib/install/photo-queue";
-import { buttonStyles } from "@/components/ui/button-styles";
 import { useTickQueue } from "@/components/offline/use-tick-queue";
 import { WaitingStrip } from "@/components/offline/waiting-strip";
 import { ChecklistItemRow } from "./checklist-item-row";
@@ -31,15 +30,18 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
     setStates((s) => (s[q.itemId]?.pending && s[q.itemId]?.at === q.queuedAt ? { ...s, [q.itemId]: saved } : s));
   }, [me.name]);
 
-  const onRefused = useCallback((q: QueuedTick, error: string) => {
-    setRefusals((r) => ({ ...r, [q.itemId]: `Not saved: ${error}` }));
+  /** A refused save: the item goes back to what the server last confirmed, with the reason. */
+  const refuse = useCallback((itemId: string, reason: string) => {
+    setRefusals((r) => ({ ...r, [itemId]: reason }));
     setStates((s) => {
       const next = { ...s };
-      if (confirmed[q.itemId]) next[q.itemId] = confirmed[q.itemId];
-      else delete next[q.itemId];
+      if (confirmed[itemId]) next[itemId] = confirmed[itemId];
+      else delete next[itemId];
       return next;
     });
   }, [confirmed]);
+
+  const onRefused = useCallback((q: QueuedTick, error: string) => refuse(q.itemId, `Not saved: ${error}`), [refuse]);
 
   const { queue, enqueue, retryNow, lastError } = useTickQueue(projectId, { onSaved, onRefused });
 
@@ -61,16 +63,10 @@ export function ChecklistDay({ projectId, stages, items, initial, me }: Props) {
           const q = enqueue({ itemId: held.itemId, done: true, note: held.note, value: held.value, attachmentId: o.photo.id, clientKey: tickKeyForPhoto(entry.clientKey) });
           setStates((s) => ({ ...s, [held.itemId]: { done: true, note: held.note, value: held.value, attachmentId: o.photo.id, byName: me.name, mine: true, at: q.queuedAt, pending: true } }));
         } else {
-          setRefusals((r) => ({ ...r, [held.itemId]: `Not saved: the photo was refused. ${o.message} Take it again.` }));
-          setStates((s) => {
-            const next = { ...s };
-            if (confirmed[held.itemId]) next[held.itemId] = confirmed[held.itemId];
-            else delete next[held.itemId];
-            return next;
-          });
+          refuse(held.itemId, `Not saved: the photo was refused. ${o.message} Take it again.`);
         }
       }),
-    [listen, enqueue, me.name, confirmed],
+    [listen, enqueue, me.name, refuse],
   );
 
   // Ticks held on photos still on this phone show as pending, waiting for the photo.
