@@ -1,5 +1,5 @@
 import { readFileSync } from "node:fs";
-import { expect, test } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import { and, eq } from "drizzle-orm";
 import sharp from "sharp";
 import { db } from "@/db";
@@ -14,14 +14,22 @@ test.use({ viewport: { width: 390, height: 844 }, trace: "off", serviceWorkers: 
 /** A 160 × 120 HEIC photo made with libheif's heif-enc, as an iPhone sends it. */
 const HEIC = readFileSync(new URL("../fixtures/tank-160x120.heic", import.meta.url));
 
-test("install day on a phone: HEIC and JPEG photos, a photo taken without signal, and the page opening offline", async ({ page, context }) => {
+/**
+ * A crew member on a project in aquascape opens install day for the first time, which registers
+ * the worker and saves the page and its built files.
+ */
+async function openInstallDay(page: Page) {
   const t = await makeTeam("aquascape");
   await signIn(page, t.crew.email, PASSWORD);
   await expect(page).toHaveURL(/\/board$/);
   await page.goto(`/projects/${t.project.id}/install`);
   await ready(page);
-  // The first visit registers the worker, which saves this page and its built files.
   await expect(page.locator("html[data-offline-ready=true]")).toHaveCount(1, { timeout: 30_000 });
+  return t;
+}
+
+test("install day on a phone: HEIC and JPEG photos, a photo taken without signal, and the page opening offline", async ({ page, context }) => {
+  const t = await openInstallDay(page);
 
   const photos = page.getByTestId("day-photos");
   const picker = photos.locator('input[type="file"]');
@@ -89,12 +97,7 @@ test("install day on a phone: HEIC and JPEG photos, a photo taken without signal
 });
 
 test("a checklist item's photo taken without signal: the tick waits for the photo, survives a reload, and each reaches the server once", async ({ page, context }) => {
-  const t = await makeTeam("aquascape");
-  await signIn(page, t.crew.email, PASSWORD);
-  await expect(page).toHaveURL(/\/board$/);
-  await page.goto(`/projects/${t.project.id}/install`);
-  await ready(page);
-  await expect(page.locator("html[data-offline-ready=true]")).toHaveCount(1, { timeout: 30_000 });
+  const t = await openInstallDay(page);
 
   const label = "Photo of the finished aquascape";
   const scape = page.locator(`[data-testid="checklist-item"][data-item="${label}"]`);
